@@ -1,0 +1,7 @@
+'use client';
+
+import { TokenManager } from '@/components/token-manager';
+
+export function MyTokens() {
+  return <TokenManager />;
+}

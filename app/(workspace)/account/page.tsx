@@ -1,0 +1,21 @@
+import type { Metadata } from 'next';
+import { requireUser } from '@/lib/auth/page';
+import { PasswordForm } from './password-form';
+import { MyTokens } from './my-tokens';
+
+export const metadata: Metadata = { title: 'Account' };
+
+export default async function AccountPage() {
+  const user = await requireUser();
+  return (
+    <div className="grid gap-6 lg:grid-cols-2">
+      <section className="panel space-y-1">
+        <h1 className="text-lg font-semibold">{user.name}</h1>
+        <p className="text-sm text-ink-soft">{user.email}</p>
+        <p className="text-sm">Roles: {user.roles.join(', ')}</p>
+        <div className="pt-4"><PasswordForm /></div>
+      </section>
+      <MyTokens />
+    </div>
+  );
+}

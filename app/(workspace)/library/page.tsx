@@ -1,0 +1,3 @@
+export default function LibraryPage() {
+  return <h1 className="text-xl font-semibold">Correlation library</h1>;
+}

@@ -1,0 +1,20 @@
+import { route } from '@/lib/http/handler';
+import { AppError } from '@/lib/http/errors';
+import { createApiToken, listApiTokens } from '@/lib/api/tokens';
+import { createTokenBody, listTokensQuery } from './schema';
+
+export const GET = route({ access: {}, query: listTokensQuery }, async ({ caller, query }) => {
+  const isAdmin = caller!.user.roles.includes('admin');
+  if (query.all === '1' && !isAdmin) throw new AppError('forbidden:role', 'Only admins can list every token.');
+  return { items: await listApiTokens({ userId: query.all === '1' ? undefined : caller!.user.id }) };
+});
+
+export const POST = route({ access: {}, body: createTokenBody }, async ({ caller, body }) => {
+  if (caller!.via !== 'session') throw new AppError('forbidden:session-only', 'Create API tokens from a signed-in browser session.');
+  const userId = body.userId ?? caller!.user.id;
+  if (userId !== caller!.user.id && !caller!.user.roles.includes('admin')) {
+    throw new AppError('forbidden:role', 'Only admins can create tokens for other users.');
+  }
+  const expiresAt = body.expiresInDays ? new Date(Date.now() + body.expiresInDays * 86_400_000) : null;
+  return createApiToken({ actorId: caller!.user.id, userId, name: body.name, scopes: body.scopes, expiresAt });
+});

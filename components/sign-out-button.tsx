@@ -1,0 +1,7 @@
+'use client';
+
+import { signOut } from 'next-auth/react';
+
+export function SignOutButton() {
+  return <button type="button" className="btn-quiet" onClick={() => signOut({ callbackUrl: '/sign-in' })}>Sign out</button>;
+}

@@ -1,0 +1,66 @@
+import { randomBytes, createHash } from 'node:crypto';
+import { db } from '@/models';
+import { AppError } from '@/lib/http/errors';
+import { appendAuditEvent } from '@/lib/audit/log';
+
+export const TOKEN_SCOPES = ['read', 'evaluate'] as const;
+export type TokenScope = (typeof TOKEN_SCOPES)[number];
+const TOKEN_PREFIX = 'crl_';
+
+export const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
+
+/** Creates a token; the plain value is returned once and only its hash is stored. */
+export async function createApiToken({ actorId, userId, name, scopes, expiresAt }: {
+  actorId: number | null; userId: number; name: string; scopes: TokenScope[]; expiresAt: Date | null;
+}) {
+  const { sequelize, ApiToken } = db();
+  const plain = TOKEN_PREFIX + randomBytes(24).toString('base64url');
+  const prefix = plain.slice(0, 12);
+  return sequelize.transaction(async (transaction) => {
+    const row = await ApiToken.create({
+      userId, name, prefix, tokenHash: hashToken(plain), scopes: [...new Set(scopes)].sort().join(' '),
+      expiresAt, revokedAt: null, lastUsedAt: null,
+    }, { transaction });
+    await appendAuditEvent({ transaction, event: { actorId, action: 'token.created', entityType: 'api_token', entityId: String(row.id), details: { userId, name, prefix, scopes, expiresAt: expiresAt?.toISOString() ?? null } } });
+    return { id: row.id, token: plain, prefix, name, scopes, expiresAt };
+  });
+}
+
+export async function revokeApiToken({ actorId, tokenId, isAdmin }: { actorId: number; tokenId: number; isAdmin: boolean }) {
+  const { sequelize, ApiToken } = db();
+  return sequelize.transaction(async (transaction) => {
+    const row = await ApiToken.findByPk(tokenId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!row || (!isAdmin && row.userId !== actorId)) throw new AppError('not_found:api-token', `No API token with id ${tokenId}.`);
+    if (row.revokedAt) return row;
+    await row.update({ revokedAt: new Date() }, { transaction });
+    await appendAuditEvent({ transaction, event: { actorId, action: 'token.revoked', entityType: 'api_token', entityId: String(row.id), details: { prefix: row.prefix } } });
+    return row;
+  });
+}
+
+export async function listApiTokens({ userId }: { userId?: number }) {
+  const { ApiToken, User } = db();
+  const rows = await ApiToken.findAll({ where: userId ? { userId } : {}, order: [['id', 'DESC']] });
+  const users = new Map((await User.findAll({ attributes: ['id', 'email'] })).map((u) => [u.id, u.email]));
+  return rows.map((t) => ({
+    id: t.id, name: t.name, prefix: t.prefix, scopes: t.scopes.split(' '), userId: t.userId,
+    userEmail: users.get(t.userId) ?? '?', expiresAt: t.expiresAt, revokedAt: t.revokedAt,
+    lastUsedAt: t.lastUsedAt, createdAt: t.createdAt,
+  }));
+}
+
+/** Resolves a bearer token to its row; revoked, expired or unknown tokens are refused at once. */
+export async function resolveApiToken(plain: string) {
+  const { ApiToken } = db();
+  const row = await ApiToken.findOne({ where: { tokenHash: hashToken(plain) } });
+  if (!row) throw new AppError('unauthenticated:token', 'The API token is not valid.');
+  if (row.revokedAt) throw new AppError('unauthenticated:token-revoked', 'The API token was revoked.');
+  if (row.expiresAt && row.expiresAt.getTime() <= Date.now()) {
+    throw new AppError('unauthenticated:token-expired', 'The API token has expired.');
+  }
+  // Last-used is advisory: update without waiting, at most once a minute per token.
+  if (!row.lastUsedAt || Date.now() - row.lastUsedAt.getTime() > 60_000) {
+    void ApiToken.update({ lastUsedAt: new Date() }, { where: { id: row.id } }).catch(() => undefined);
+  }
+  return { id: row.id, userId: row.userId, scopes: row.scopes.split(' ') as TokenScope[] };
+}

@@ -1,0 +1,127 @@
+import 'server-only';
+import { NextResponse, type NextRequest } from 'next/server';
+import { getServerSession } from 'next-auth';
+import { z, type ZodType } from 'zod';
+import { authOptions } from '@/lib/auth/options';
+import { findUserById, type AuthUser } from '@/lib/auth/users';
+import { resolveApiToken, type TokenScope } from '@/lib/api/tokens';
+import type { Role } from '@/models';
+import { AppError, statusOf } from './errors';
+
+export interface Caller {
+  user: AuthUser;
+  via: 'session' | 'token';
+  tokenId: number | null;
+  scopes: TokenScope[] | null;
+}
+
+export interface AccessRule {
+  /** Any one of these roles is enough; omit for "any signed-in user". */
+  roles?: Role[];
+  /** Scope a token must carry (sessions have every scope their roles allow). */
+  scope?: TokenScope;
+  /** Public endpoint: no authentication at all. */
+  public?: boolean;
+}
+
+interface Spec<Q, B, P> {
+  access: AccessRule;
+  query?: ZodType<Q>;
+  body?: ZodType<B>;
+  params?: ZodType<P>;
+  /** Largest accepted body, bytes. */
+  maxBody?: number;
+}
+
+export interface Ctx<Q, B, P> {
+  req: NextRequest;
+  caller: Caller | null;
+  query: Q;
+  body: B;
+  params: P;
+}
+
+type Handler<Q, B, P> = (ctx: Ctx<Q, B, P>) => Promise<Response | unknown>;
+
+export function zodIssues(error: z.ZodError) {
+  return error.issues.map((i) => ({ path: i.path.join('.') || '(body)', message: i.message }));
+}
+
+function errorResponse(err: unknown): Response {
+  if (err instanceof AppError) {
+    const status = statusOf(err.code);
+    const body = { error: { code: err.code, message: err.message, ...(err.details !== undefined ? { details: err.details } : {}) } };
+    return NextResponse.json(body, { status: status === 500 ? 400 : status, headers: err.headers });
+  }
+  console.error('unhandled error in route handler', err);
+  return NextResponse.json({ error: { code: 'internal', message: 'Something went wrong on the server; the error was logged.' } }, { status: 500 });
+}
+
+async function identify(req: NextRequest): Promise<Caller | null> {
+  const header = req.headers.get('authorization');
+  if (header) {
+    const match = /^Bearer\s+(\S+)$/i.exec(header);
+    if (!match) throw new AppError('unauthenticated:header', 'The Authorization header must be "Bearer <token>".');
+    const token = await resolveApiToken(match[1]);
+    const user = await findUserById({ id: token.userId });
+    if (!user || !user.isActive) throw new AppError('unauthenticated:token', 'The API token belongs to an inactive user.');
+    return { user: { id: user.id, email: user.email, name: user.name, roles: user.roleNames() }, via: 'token', tokenId: token.id, scopes: token.scopes };
+  }
+  const session = await getServerSession(authOptions);
+  if (!session?.user?.id) return null;
+  // Roles are read fresh from the database: a role change or deactivation takes effect at once.
+  const user = await findUserById({ id: session.user.id });
+  if (!user || !user.isActive) return null;
+  return { user: { id: user.id, email: user.email, name: user.name, roles: user.roleNames() }, via: 'session', tokenId: null, scopes: null };
+}
+
+export function authorize(caller: Caller | null, access: AccessRule): asserts caller is Caller {
+  if (!caller) throw new AppError('unauthenticated:required', 'Sign in or send an API token (Authorization: Bearer …).');
+  if (access.roles && !access.roles.some((r) => caller.user.roles.includes(r))) {
+    throw new AppError('forbidden:role', `This needs one of the roles: ${access.roles.join(', ')}.`);
+  }
+  if (access.scope && caller.scopes && !caller.scopes.includes(access.scope)) {
+    throw new AppError('forbidden:token-scope', `The API token lacks the "${access.scope}" scope.`);
+  }
+}
+
+async function readBody(req: NextRequest, maxBody: number): Promise<unknown> {
+  const declared = Number(req.headers.get('content-length') ?? 0);
+  if (declared > maxBody) throw new AppError('too_large:body', `The request body is larger than ${maxBody} bytes.`);
+  const text = await req.text();
+  if (text.length > maxBody) throw new AppError('too_large:body', `The request body is larger than ${maxBody} bytes.`);
+  if (!text.trim()) throw new AppError('bad_request:body', 'The request body is empty; send a JSON object.');
+  try {
+    return JSON.parse(text);
+  } catch {
+    throw new AppError('bad_request:json', 'The request body is not valid JSON.');
+  }
+}
+
+function parseWith<T>(schema: ZodType<T>, value: unknown, what: string): T {
+  const result = schema.safeParse(value);
+  if (!result.success) {
+    const issues = zodIssues(result.error);
+    throw new AppError(`invalid:${what}`, `The ${what} is not valid: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`, { issues });
+  }
+  return result.data;
+}
+
+/** One wrapper for every route handler: parse → authenticate → authorize → act → respond. */
+export function route<Q = undefined, B = undefined, P = undefined>(spec: Spec<Q, B, P>, handler: Handler<Q, B, P>) {
+  return async (req: NextRequest, context: { params: Promise<Record<string, string>> }) => {
+    try {
+      const caller = spec.access.public ? null : await identify(req);
+      if (!spec.access.public) authorize(caller, spec.access);
+      const params = spec.params ? parseWith(spec.params, await context.params, 'path') : (undefined as P);
+      const query = spec.query
+        ? parseWith(spec.query, Object.fromEntries(req.nextUrl.searchParams.entries()), 'query')
+        : (undefined as Q);
+      const body = spec.body ? parseWith(spec.body, await readBody(req, spec.maxBody ?? 1_000_000), 'body') : (undefined as B);
+      const result = await handler({ req, caller, query, body, params });
+      return result instanceof Response ? result : NextResponse.json(result);
+    } catch (err) {
+      return errorResponse(err);
+    }
+  };
+}

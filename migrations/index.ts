@@ -1,0 +1,13 @@
+import type { QueryInterface } from 'sequelize';
+import * as usersAndRoles from './20261201000100-users-and-roles';
+import * as correlations from './20261201000200-correlations-and-versions';
+import * as apiTokens from './20261201000300-api-tokens-usage-rate-limits';
+
+export interface Migration {
+  name: string;
+  up(qi: QueryInterface): Promise<void>;
+  down(qi: QueryInterface): Promise<void>;
+}
+
+/** Every migration in order. Add new files here; the name is what the tracking table records. */
+export const migrations: Migration[] = [usersAndRoles, correlations, apiTokens];

@@ -1,0 +1,25 @@
+#!/usr/bin/env bash
+# Sourced by the other scripts: loads .env.local (creating it with fresh secrets on first run)
+# and exports the defaults every tool of the project expects.
+ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
+if [ ! -f "$ROOT/.env.local" ]; then
+  umask 077
+  {
+    echo "# Created by scripts/env.sh on first run; local secrets, never committed."
+    echo "DB_PASSWORD=$(head -c 18 /dev/urandom | base64 | tr -d '+/=')"
+    echo "NEXTAUTH_SECRET=$(head -c 32 /dev/urandom | base64 | tr -d '+/=')"
+  } > "$ROOT/.env.local"
+fi
+set -a
+# shellcheck disable=SC1091
+. "$ROOT/.env.local"
+set +a
+export DB_HOST="${DB_HOST:-127.0.0.1}"
+export DB_PORT="${DB_PORT:-3307}"
+export DB_NAME="${DB_NAME:-correlary}"
+export DB_TEST_NAME="${DB_TEST_NAME:-correlary_test}"
+export DB_USER="${DB_USER:-correlary}"
+export SMTP_HOST="${SMTP_HOST:-127.0.0.1}"
+export SMTP_PORT="${SMTP_PORT:-2525}"
+export NEXT_TELEMETRY_DISABLED=1
+export DATA_DIR="$ROOT/.data"

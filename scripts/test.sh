@@ -1,0 +1,67 @@
+#!/usr/bin/env bash
+# Everything the tests need, then: type-check → migrations/seed on the test database → production
+# build → vitest (unit + integration against the real MariaDB and the running app) → Playwright.
+set -euo pipefail
+ROOT="$(cd "$(dirname "$0")/.." && pwd)"
+cd "$ROOT"
+bash scripts/ensure-deps.sh
+. scripts/env.sh
+
+if [ ! -x /usr/bin/chromium ]; then
+  if [ "$(id -u)" = "0" ]; then
+    echo "Installing Debian's chromium for browser tests…"
+    apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium >/dev/null
+  else
+    echo "Browser tests need Debian's chromium: sudo apt-get install -y chromium" >&2; exit 1
+  fi
+fi
+
+DB_WAS_RUNNING=0
+bash scripts/db.sh status >/dev/null 2>&1 && DB_WAS_RUNNING=1
+bash scripts/db.sh start
+bash scripts/db.sh reset-test
+
+export DB_NAME="$DB_TEST_NAME"
+export SMTP_PORT="${TEST_SMTP_PORT:-2526}"
+export MAIL_DIR="$DATA_DIR/mail-test"
+export TEST_PORT="${TEST_PORT:-3100}"
+export TEST_BASE_URL="http://127.0.0.1:$TEST_PORT"
+export NEXTAUTH_URL="$TEST_BASE_URL"
+export RATE_LIMIT_PER_MINUTE="${RATE_LIMIT_PER_MINUTE:-100000}"
+rm -rf "$MAIL_DIR" && mkdir -p "$MAIL_DIR"
+
+PIDS=()
+cleanup() {
+  for pid in "${PIDS[@]}"; do kill "$pid" 2>/dev/null || true; done
+  wait 2>/dev/null || true
+  if [ "$DB_WAS_RUNNING" = "0" ]; then bash scripts/db.sh stop >/dev/null || true; fi
+}
+trap cleanup EXIT
+
+npx tsx scripts/fake-smtp.ts >"$DATA_DIR/fake-smtp-test.log" 2>&1 &
+PIDS+=($!)
+
+echo "== type-check"
+./node_modules/.bin/tsc --noEmit
+
+echo "== migrations and seed (test database $DB_NAME)"
+npx tsx scripts/migrate.ts up
+npx tsx scripts/seed.ts up
+
+echo "== production build"
+./node_modules/.bin/next build >"$DATA_DIR/build-test.log" 2>&1 || { tail -60 "$DATA_DIR/build-test.log"; exit 1; }
+
+./node_modules/.bin/next start -H 127.0.0.1 -p "$TEST_PORT" >"$DATA_DIR/server-test.log" 2>&1 &
+PIDS+=($!)
+for _ in $(seq 1 120); do
+  curl -fsS "$TEST_BASE_URL/api/health" >/dev/null 2>&1 && break
+  sleep 0.5
+done
+curl -fsS "$TEST_BASE_URL/api/health" >/dev/null || { echo "The app did not become healthy"; tail -40 "$DATA_DIR/server-test.log"; exit 1; }
+
+status=0
+echo "== vitest"
+./node_modules/.bin/vitest run || status=1
+echo "== playwright"
+./node_modules/.bin/playwright test || status=1
+exit $status

@@ -1,0 +1,15 @@
+import 'next-auth';
+import 'next-auth/jwt';
+
+declare module 'next-auth' {
+  interface Session {
+    user: { id: number; roles: string[]; name?: string | null; email?: string | null; image?: string | null };
+  }
+}
+
+declare module 'next-auth/jwt' {
+  interface JWT {
+    uid?: number;
+    roles?: string[];
+  }
+}
