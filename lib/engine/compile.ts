@@ -1,0 +1,246 @@
+import { FUNCTIONS, toJs } from './expressions';
+import { brent, interpolate, NoRootError } from './solve';
+import { convert, isDimensionless } from './units';
+import { analyseDefinition, DefinitionError, type Analysed } from './analyse';
+import { checkDefinitionSchema } from './schema';
+import { canonicalJson, sha256Hex } from './canonical';
+import type { Definition, EvaluationResult, InputValue, Warning } from './types';
+
+/** A limit as the evaluator checks it; table ranges become limits too. */
+export interface CompiledLimit {
+  symbol: string;
+  min?: number;
+  max?: number;
+  minInclusive: boolean;
+  maxInclusive: boolean;
+  action: 'warn' | 'refuse';
+  note?: string;
+}
+
+export class EvaluationError extends Error {
+  constructor(readonly code: 'refused' | 'no-root' | 'not-finite', message: string, readonly symbol?: string, readonly warnings: Warning[] = []) {
+    super(message);
+    this.name = 'EvaluationError';
+  }
+}
+
+export interface InputIssue {
+  path: string;
+  message: string;
+}
+
+export class InputError extends Error {
+  constructor(readonly issues: InputIssue[]) {
+    super(issues.map((i) => `${i.path}: ${i.message}`).join('; '));
+    this.name = 'InputError';
+  }
+}
+
+export interface CompiledDefinition {
+  hash: string;
+  definition: Definition;
+  analysed: Analysed;
+  inputSymbols: string[];
+  outputSymbols: string[];
+  limits: CompiledLimit[];
+  /** Evaluation on plain numbers in declared units (the fast path). */
+  run(values: ArrayLike<number>): EvaluationResult;
+  /** Evaluation from API-style inputs: numbers in declared units or { value, unit }. */
+  evaluate(inputs: Record<string, unknown>): EvaluationResult;
+  /** Turns API-style inputs into numbers in declared units; `path` prefixes error paths. */
+  readInputs(inputs: unknown, path: string): Float64Array;
+  /** The generated JavaScript, for inspection and tests. */
+  source: string;
+}
+
+type WarnFn = (limit: number, value: number) => void;
+type RunFn = (v: Float64Array, W: WarnFn, F: typeof FUNCTION_IMPLS, S: typeof solveStep, T: typeof tableStep) => void;
+
+const FUNCTION_IMPLS = Object.freeze(Object.fromEntries(Object.entries(FUNCTIONS).map(([k, v]) => [k, v.impl]))) as Record<string, (...a: number[]) => number>;
+
+function solveStep(f: (x: number) => number, lo: number, hi: number, symbol: string): number {
+  try {
+    return brent(f, lo, hi);
+  } catch (err) {
+    if (err instanceof NoRootError) throw new EvaluationError('no-root', `solving for ${symbol}: ${err.message}`, symbol);
+    throw err;
+  }
+}
+
+function tableStep(xs: Float64Array, ys: Float64Array, x: number): number {
+  return interpolate(xs, ys, x);
+}
+
+function limitCheck(slot: number, index: number, lim: CompiledLimit): string {
+  const parts: string[] = [];
+  if (lim.min !== undefined) parts.push(`v[${slot}] ${lim.minInclusive ? '<' : '<='} ${lim.min}`);
+  if (lim.max !== undefined) parts.push(`v[${slot}] ${lim.maxInclusive ? '>' : '>='} ${lim.max}`);
+  return `if (${parts.join(' || ')}) W(${index}, v[${slot}]);`;
+}
+
+function fmt(x: number): string {
+  if (x === 0) return '0';
+  const a = Math.abs(x);
+  return a >= 1e5 || a < 1e-3 ? x.toExponential(3).replace(/\.?0+e/, 'e') : String(Number(x.toPrecision(6)));
+}
+
+export function limitMessage(lim: CompiledLimit, value: number): string {
+  const below = lim.min !== undefined && (lim.minInclusive ? value < lim.min : value <= lim.min);
+  const bound = below ? lim.min! : lim.max!;
+  const word = below ? (lim.minInclusive ? 'below the minimum' : 'at or below the exclusive minimum') : (lim.maxInclusive ? 'above the maximum' : 'at or above the exclusive maximum');
+  const range = `${lim.min !== undefined ? fmt(lim.min) : '−∞'} … ${lim.max !== undefined ? fmt(lim.max) : '∞'}`;
+  const what = lim.note?.startsWith('table:') ? `outside the tabulated range (${range}); value extrapolated linearly` : `${word} ${fmt(bound)} of the published validity range (${range})`;
+  return `${lim.symbol} = ${fmt(value)} is ${what}${lim.note && !lim.note.startsWith('table:') ? ` — ${lim.note}` : ''}`;
+}
+
+/** Compiles a definition (schema-checked, analysed) into a fast evaluator over plain numbers. */
+export function compileDefinition(definition: Definition): CompiledDefinition {
+  const schemaIssues = checkDefinitionSchema(definition);
+  if (schemaIssues.length) throw new DefinitionError(schemaIssues.map((i) => ({ stage: 'schema', ...i })));
+  const { analysed, issues } = analyseDefinition(definition);
+  if (!analysed) throw new DefinitionError(issues);
+  const { slots } = analysed;
+  const slot = (s: string) => slots.get(s)!;
+
+  const limits: CompiledLimit[] = (definition.validity ?? []).map((l) => ({
+    symbol: l.symbol, min: l.min, max: l.max, minInclusive: l.minInclusive ?? true, maxInclusive: l.maxInclusive ?? true,
+    action: l.action ?? 'warn', note: l.note,
+  }));
+  const limitsOf = (symbol: string) => limits.map((l, i) => [l, i] as const).filter(([l]) => l.symbol === symbol);
+
+  const tableData: Float64Array[] = [];
+  const lines: string[] = [];
+  for (const inp of definition.inputs) for (const [l, i] of limitsOf(inp.symbol)) lines.push(limitCheck(slot(inp.symbol), i, l));
+  for (const c of definition.constants ?? []) lines.push(`v[${slot(c.symbol)}] = ${c.value};`);
+  for (const { step, checked } of analysed.steps) {
+    const k = slot(step.symbol);
+    if (step.kind === 'expression') {
+      lines.push(`v[${k}] = ${toJs(checked[0].node, slots)};`);
+    } else if (step.kind === 'solve') {
+      const [res, lo, hi] = checked.map((c) => toJs(c.node, slots));
+      lines.push(`v[${k}] = S((x) => { v[${k}] = x; return ${res}; }, ${lo}, ${hi}, ${JSON.stringify(step.symbol)});`);
+    } else {
+      const table = definition.tables!.find((t) => t.name === step.table)!;
+      const xs = Float64Array.from(table.columns.find((c) => c.name === table.key)!.values);
+      const ys = Float64Array.from(table.columns.find((c) => c.name === step.column)!.values);
+      tableData.push(xs, ys);
+      const tableLimit: CompiledLimit = { symbol: step.at, min: xs[0], max: xs[xs.length - 1], minInclusive: true, maxInclusive: true, action: 'warn', note: `table:${table.name}` };
+      const already = limits.findIndex((l) => l.symbol === step.at && l.note === tableLimit.note);
+      const li = already >= 0 ? already : limits.push(tableLimit) - 1;
+      if (already < 0) lines.push(limitCheck(slot(step.at), li, tableLimit));
+      lines.push(`v[${k}] = T(D[${tableData.length - 2}], D[${tableData.length - 1}], v[${slot(step.at)}]);`);
+    }
+    for (const [l, i] of limitsOf(step.symbol)) lines.push(limitCheck(k, i, l));
+  }
+  for (const out of analysed.outputs) {
+    const k = slot(out.symbol);
+    lines.push(`v[${k}] = ${toJs(out.checked.node, slots)};`);
+    for (const [l, i] of limitsOf(out.symbol)) lines.push(limitCheck(k, i, l));
+  }
+  const source = `"use strict";\n${lines.join('\n')}`;
+  // The body holds only numbers, v[i] slots and F/S/T/W/D calls generated from the whitelisted tree.
+  const body = new Function('v', 'W', 'F', 'S', 'T', 'D', source) as (...a: unknown[]) => void;
+  const run: RunFn = (v, W, F, S, T) => body(v, W, F, S, T, tableData);
+
+  const inputSymbols = definition.inputs.map((i) => i.symbol);
+  const outputSymbols = definition.outputs.map((o) => o.symbol);
+  const outputSlots = outputSymbols.map(slot);
+  const inputUnits = definition.inputs.map((i) => i.unit);
+  const nSlots = slots.size;
+
+  const runValues = (values: ArrayLike<number>): EvaluationResult => {
+    const v = new Float64Array(nSlots);
+    for (let i = 0; i < inputSymbols.length; i++) v[i] = values[i];
+    const warnings: Warning[] = [];
+    const W: WarnFn = (index, value) => {
+      const lim = limits[index];
+      const w: Warning = { symbol: lim.symbol, value, message: limitMessage(lim, value) };
+      if (lim.min !== undefined) w.min = lim.min;
+      if (lim.max !== undefined) w.max = lim.max;
+      if (lim.action === 'refuse') {
+        throw new EvaluationError('refused', `${w.message}. This limit is marked hard: no result is given.`, lim.symbol, [...warnings, w]);
+      }
+      warnings.push(w);
+    };
+    run(v, W, FUNCTION_IMPLS as never, solveStep, tableStep);
+    const outputs: Record<string, number> = {};
+    for (let i = 0; i < outputSymbols.length; i++) {
+      const value = v[outputSlots[i]];
+      if (!Number.isFinite(value)) {
+        throw new EvaluationError('not-finite', `${outputSymbols[i]} cannot be computed for these inputs (the formula gives ${value}); check them against the validity ranges`, outputSymbols[i], warnings);
+      }
+      outputs[outputSymbols[i]] = value;
+    }
+    return { outputs, warnings };
+  };
+
+  const readInputs = (inputs: unknown, path: string): Float64Array => {
+    const issues: InputIssue[] = [];
+    const values = new Float64Array(inputSymbols.length);
+    if (!inputs || typeof inputs !== 'object' || Array.isArray(inputs)) {
+      throw new InputError([{ path, message: `must be an object with the inputs ${inputSymbols.join(', ')}` }]);
+    }
+    const given = inputs as Record<string, unknown>;
+    for (const key of Object.keys(given)) {
+      if (!inputSymbols.includes(key)) issues.push({ path: `${path}.${key}`, message: `unknown input; this correlation takes ${inputSymbols.join(', ')}` });
+    }
+    inputSymbols.forEach((symbol, i) => {
+      const raw = given[symbol];
+      const p = `${path}.${symbol}`;
+      if (raw === undefined || raw === null) { issues.push({ path: p, message: 'is missing' }); return; }
+      let value: number;
+      if (typeof raw === 'number') value = raw;
+      else if (typeof raw === 'object' && !Array.isArray(raw) && 'value' in raw) {
+        const { value: v, unit } = raw as { value: unknown; unit?: unknown };
+        if (typeof v !== 'number' || !Number.isFinite(v)) { issues.push({ path: `${p}.value`, message: 'must be a finite number' }); return; }
+        if (unit === undefined || unit === null || unit === '') value = v;
+        else if (typeof unit !== 'string') { issues.push({ path: `${p}.unit`, message: 'must be a unit string such as "degC"' }); return; }
+        else {
+          try {
+            value = convert(v, unit, inputUnits[i]);
+          } catch (err) {
+            issues.push({ path: `${p}.unit`, message: `${(err as Error).message}; ${symbol} is declared in ${isDimensionless(inputUnits[i]) ? 'no unit (dimensionless)' : `"${inputUnits[i]}"`}` });
+            return;
+          }
+        }
+      } else { issues.push({ path: p, message: 'must be a number or { "value": number, "unit": string }' }); return; }
+      if (!Number.isFinite(value)) { issues.push({ path: p, message: 'must be a finite number (not NaN or Infinity)' }); return; }
+      values[i] = value;
+    });
+    if (issues.length) throw new InputError(issues);
+    return values;
+  };
+
+  return {
+    hash: sha256Hex(canonicalJson(definition)),
+    definition,
+    analysed,
+    inputSymbols,
+    outputSymbols,
+    limits,
+    run: runValues,
+    readInputs,
+    evaluate: (inputs) => runValues(readInputs(inputs, 'inputs')),
+    source,
+  };
+}
+
+const cache = new Map<string, CompiledDefinition>();
+const CACHE_SIZE = 500;
+
+/** Compiled evaluator for a definition, cached by the hash of its canonical JSON. */
+export function compiled(definition: Definition, knownHash?: string): CompiledDefinition {
+  const key = knownHash ?? sha256Hex(canonicalJson(definition));
+  let hit = cache.get(key);
+  if (hit) {
+    cache.delete(key);
+    cache.set(key, hit);
+    return hit;
+  }
+  hit = compileDefinition(definition);
+  cache.set(key, hit);
+  if (cache.size > CACHE_SIZE) cache.delete(cache.keys().next().value!);
+  return hit;
+}
+
+export type { InputValue };

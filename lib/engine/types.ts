@@ -1,0 +1,132 @@
+/**
+ * A correlation version's definition, as stored and as validated by validation/definition.schema.json.
+ * Kept in step with the schema by tests/unit/engine-schema.test.ts.
+ */
+export interface Definition {
+  schemaVersion: 1;
+  title: string;
+  summary: string;
+  category: Category;
+  situation: string;
+  tags?: string[];
+  inputs: InputDef[];
+  constants?: ConstantDef[];
+  tables?: TableDef[];
+  steps?: StepDef[];
+  outputs: OutputDef[];
+  validity?: ValidityLimit[];
+  references: Reference[];
+  propertyBasis?: string;
+  notes?: string;
+}
+
+export const CATEGORIES = [
+  'external-flow', 'internal-flow', 'free-convection', 'friction', 'boundary-layer', 'properties',
+] as const;
+export type Category = (typeof CATEGORIES)[number];
+
+export interface InputDef {
+  symbol: string;
+  name: string;
+  /** A unit mathjs understands ("m", "W/(m^2 K)", "Pa s"), or "1" for a dimensionless group. */
+  unit: string;
+  description?: string;
+}
+
+export interface ConstantDef {
+  symbol: string;
+  name: string;
+  value: number;
+  unit: string;
+}
+
+export interface TableDef {
+  name: string;
+  source: string;
+  /** The column looked up by (strictly increasing). */
+  key: string;
+  columns: { name: string; unit: string; values: number[] }[];
+}
+
+export type StepDef = ExpressionStep | SolveStep | TableStep;
+
+interface StepBase {
+  symbol: string;
+  name: string;
+  unit: string;
+}
+
+export interface ExpressionStep extends StepBase {
+  kind: 'expression';
+  expression: string;
+}
+
+/** An implicit equation residual(symbol) = 0, solved by Brent's method inside the bracket. */
+export interface SolveStep extends StepBase {
+  kind: 'solve';
+  residual: string;
+  bracket: [string | number, string | number];
+}
+
+/** Linear interpolation of `column` of table `table` at the value of symbol `at`. */
+export interface TableStep extends StepBase {
+  kind: 'table';
+  table: string;
+  column: string;
+  at: string;
+}
+
+export interface OutputDef {
+  symbol: string;
+  name: string;
+  unit: string;
+  expression: string;
+}
+
+export interface ValidityLimit {
+  symbol: string;
+  min?: number;
+  max?: number;
+  minInclusive?: boolean;
+  maxInclusive?: boolean;
+  /** warn (default): compute and warn; refuse: no result, a clear error. */
+  action?: 'warn' | 'refuse';
+  note?: string;
+}
+
+export interface Reference {
+  citation: string;
+  locator?: string;
+  doi?: string;
+}
+
+export type InputValue = number | { value: number; unit: string };
+
+export const SOURCE_KINDS = ['published', 'numerical', 'common-practice', 'memory'] as const;
+export type SourceKind = (typeof SOURCE_KINDS)[number];
+
+export interface CheckCase {
+  label: string;
+  inputs: Record<string, InputValue>;
+  /** Expected values per output symbol (in the output's declared unit). */
+  expected: Record<string, number>;
+  tolerance: { rel?: number; abs?: number; why?: string };
+  source: { kind: SourceKind; citation: string; locator?: string };
+  /** Symbols whose limits this case is meant to break; absent means none. */
+  expectWarnings?: string[];
+  /** The case is meant to hit a `refuse` limit. */
+  expectRefusal?: boolean;
+}
+
+export interface Warning {
+  symbol: string;
+  value: number;
+  min?: number;
+  max?: number;
+  message: string;
+}
+
+export interface EvaluationResult {
+  outputs: Record<string, number>;
+  warnings: Warning[];
+}

@@ -1,0 +1,183 @@
+import { checkCheckCaseSchema, checkDefinitionSchema } from './schema';
+import { analyseDefinition, type DefinitionIssue, type Stage } from './analyse';
+import { checkDimensions } from './dimensions';
+import { compiled, EvaluationError, InputError, type CompiledDefinition } from './compile';
+import type { CheckCase, Definition, Warning } from './types';
+
+export const ENGINE_VERSION = '1.0.0';
+export const REPORT_FORMAT = 1;
+
+export interface CaseResult {
+  index: number;
+  label: string;
+  passed: boolean;
+  sourceKind: string;
+  citation: string;
+  locator?: string;
+  outputs: { symbol: string; computed: number | null; expected: number; error: number | null; allowed: number }[];
+  warnings: Warning[];
+  expectedWarnings: string[];
+  problems: string[];
+}
+
+export interface CoverageEntry {
+  symbol: string;
+  min: number;
+  max: number;
+  scale: 'log' | 'linear';
+  /** Thirds of the range (low, middle, high) touched by at least one in-range check case. */
+  touched: [boolean, boolean, boolean];
+  outside: number;
+}
+
+export interface ValidationReport {
+  engineVersion: string;
+  reportFormat: number;
+  passed: boolean;
+  stages: { stage: Stage; passed: boolean; issues: DefinitionIssue[] }[];
+  cases: CaseResult[];
+  coverage: { entries: CoverageEntry[]; oneCorner: boolean; message: string };
+  summary: { checkCases: number; passed: number; failed: number; inRange: number; outOfRange: number; bySource: Record<string, number> };
+}
+
+const ORDER: Stage[] = ['schema', 'expressions', 'symbols', 'dimensions', 'check-cases', 'coverage'];
+
+function runCase(c: CompiledDefinition, cc: CheckCase, index: number): CaseResult {
+  const expectedWarnings = [...(cc.expectWarnings ?? [])].sort();
+  const result: CaseResult = {
+    index, label: cc.label, passed: false, sourceKind: cc.source.kind, citation: cc.source.citation, locator: cc.source.locator,
+    outputs: [], warnings: [], expectedWarnings, problems: [],
+  };
+  let outputs: Record<string, number> | null = null;
+  try {
+    const r = c.evaluate(cc.inputs);
+    outputs = r.outputs;
+    result.warnings = r.warnings;
+    if (cc.expectRefusal) result.problems.push('expected the evaluation to be refused by a hard limit, but it gave a result');
+  } catch (err) {
+    if (err instanceof EvaluationError) {
+      result.warnings = err.warnings;
+      if (!(cc.expectRefusal && err.code === 'refused')) result.problems.push(err.message);
+    } else if (err instanceof InputError) {
+      result.problems.push(...err.issues.map((i) => `${i.path}: ${i.message}`));
+    } else throw err;
+  }
+  for (const [symbol, expected] of Object.entries(cc.expected)) {
+    if (!c.outputSymbols.includes(symbol)) {
+      result.problems.push(`expected value for "${symbol}", which is not an output (outputs: ${c.outputSymbols.join(', ')})`);
+      continue;
+    }
+    const computed = outputs ? outputs[symbol] : null;
+    const allowed = (cc.tolerance.abs ?? 0) + (cc.tolerance.rel ?? 0) * Math.abs(expected);
+    const error = computed === null ? null : computed - expected;
+    result.outputs.push({ symbol, computed, expected, error, allowed });
+    if (error === null || !(Math.abs(error) <= allowed)) {
+      if (error !== null) {
+        const rel = expected !== 0 ? ` (${((Math.abs(error) / Math.abs(expected)) * 100).toPrecision(3)} %)` : '';
+        result.problems.push(`${symbol}: computed ${computed} differs from expected ${expected} by ${Math.abs(error).toPrecision(3)}${rel}, more than the tolerance ${allowed.toPrecision(3)}`);
+      }
+    }
+  }
+  const warned = [...new Set(result.warnings.map((w) => w.symbol))].sort();
+  if (warned.join() !== expectedWarnings.join()) {
+    result.problems.push(expectedWarnings.length || warned.length
+      ? `expected range warnings for [${expectedWarnings.join(', ') || 'none'}] but got [${warned.join(', ') || 'none'}]`
+      : 'warnings differ');
+  }
+  result.passed = result.problems.length === 0;
+  return result;
+}
+
+function coverageOf(c: CompiledDefinition, cases: CheckCase[], results: CaseResult[]): ValidationReport['coverage'] {
+  const entries: CoverageEntry[] = [];
+  const inRange = cases.filter((_, i) => results[i].warnings.length === 0 && !cases[i].expectRefusal);
+  for (const inp of c.definition.inputs) {
+    const lims = c.limits.filter((l) => l.symbol === inp.symbol && !l.note?.startsWith('table:'));
+    const min = lims.find((l) => l.min !== undefined)?.min ?? c.limits.find((l) => l.symbol === inp.symbol && l.min !== undefined)?.min;
+    const max = lims.find((l) => l.max !== undefined)?.max ?? c.limits.find((l) => l.symbol === inp.symbol && l.max !== undefined)?.max;
+    if (min === undefined || max === undefined) continue;
+    const log = min > 0 && max / min >= 100;
+    const pos = (x: number) => (log ? (Math.log(x) - Math.log(min)) / (Math.log(max) - Math.log(min)) : (x - min) / (max - min));
+    const touched: [boolean, boolean, boolean] = [false, false, false];
+    let outside = 0;
+    for (const cc of cases) {
+      const raw = cc.inputs[inp.symbol];
+      let x: number;
+      try {
+        x = c.readInputs(cc.inputs, 'inputs')[c.inputSymbols.indexOf(inp.symbol)];
+      } catch {
+        x = typeof raw === 'number' ? raw : NaN;
+      }
+      if (!(x >= min && x <= max)) { outside++; continue; }
+      if (!inRange.includes(cc)) continue;
+      touched[Math.min(2, Math.floor(pos(x) * 3))] = true;
+    }
+    entries.push({ symbol: inp.symbol, min, max, scale: log ? 'log' : 'linear', touched, outside });
+  }
+  const oneCorner = entries.length > 0 && inRange.length > 0 && entries.every((e) => e.touched.filter(Boolean).length <= 1);
+  const message = entries.length === 0
+    ? 'no input has both a minimum and a maximum, so range coverage cannot be judged'
+    : oneCorner
+      ? 'the in-range check cases all sit in one corner of the validity range: every bounded input is exercised in one third of its range only'
+      : `check cases touch ${entries.map((e) => `${e.symbol}: ${e.touched.filter(Boolean).length}/3`).join(', ')} thirds of the validity ranges`;
+  return { entries, oneCorner, message };
+}
+
+/**
+ * Runs the full validation of a version: schema → expression safety → symbols → dimensions →
+ * every check case → coverage. Stops compiling at the first failing static stage but always
+ * reports what it found.
+ */
+export function validateVersion(definition: unknown, checkCases: unknown[]): ValidationReport {
+  const stages: ValidationReport['stages'] = ORDER.map((stage) => ({ stage, passed: true, issues: [] }));
+  const stage = (s: Stage) => stages.find((x) => x.stage === s)!;
+  const add = (issues: DefinitionIssue[]) => {
+    for (const i of issues) { stage(i.stage).issues.push(i); stage(i.stage).passed = false; }
+  };
+  const report = (cases: CaseResult[] = [], coverage?: ValidationReport['coverage']): ValidationReport => {
+    const bySource: Record<string, number> = {};
+    for (const c of cases) bySource[c.sourceKind] = (bySource[c.sourceKind] ?? 0) + 1;
+    const outOfRange = cases.filter((c) => c.expectedWarnings.length > 0).length;
+    const staticPassed = stages.filter((s) => s.stage !== 'coverage').every((s) => s.passed);
+    return {
+      engineVersion: ENGINE_VERSION, reportFormat: REPORT_FORMAT, passed: staticPassed, stages, cases,
+      coverage: coverage ?? { entries: [], oneCorner: false, message: 'not reached' },
+      summary: { checkCases: cases.length, passed: cases.filter((c) => c.passed).length, failed: cases.filter((c) => !c.passed).length, inRange: cases.length - outOfRange, outOfRange, bySource },
+    };
+  };
+
+  add(checkDefinitionSchema(definition).map((i) => ({ stage: 'schema' as const, ...i })));
+  if (!Array.isArray(checkCases)) {
+    add([{ stage: 'schema', pointer: '/checkCases', message: 'check cases must be a list' }]);
+    return report();
+  }
+  checkCases.forEach((cc, i) => add(checkCheckCaseSchema(cc).map((x) => ({ stage: 'schema' as const, pointer: `/checkCases/${i}${x.pointer === '/' ? '' : x.pointer}`, message: x.message }))));
+  if (!stage('schema').passed) return report();
+
+  const def = definition as Definition;
+  const { analysed, issues } = analyseDefinition(def);
+  add(issues);
+  if (!analysed) return report();
+  add(checkDimensions(analysed));
+  if (!stage('dimensions').passed) return report();
+
+  const c = compiled(def);
+  const cases = (checkCases as CheckCase[]).map((cc, i) => runCase(c, cc, i));
+  const checkStage = stage('check-cases');
+  if (cases.length === 0) {
+    checkStage.passed = false;
+    checkStage.issues.push({ stage: 'check-cases', pointer: '/checkCases', message: 'a version needs at least one check case' });
+  }
+  for (const r of cases) {
+    if (!r.passed) {
+      checkStage.passed = false;
+      checkStage.issues.push({ stage: 'check-cases', pointer: `/checkCases/${r.index}`, message: `"${r.label}": ${r.problems.join('; ')}` });
+    }
+  }
+  const coverage = coverageOf(c, checkCases as CheckCase[], cases);
+  if (coverage.oneCorner) {
+    stage('coverage').passed = false;
+    stage('coverage').issues.push({ stage: 'coverage', pointer: '/checkCases', message: coverage.message });
+  }
+  return report(cases, coverage);
+}
