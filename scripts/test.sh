@@ -38,7 +38,7 @@ cleanup() {
 }
 trap cleanup EXIT
 
-npx tsx scripts/fake-smtp.ts >"$DATA_DIR/fake-smtp-test.log" 2>&1 &
+node --import tsx scripts/fake-smtp.ts >"$DATA_DIR/fake-smtp-test.log" 2>&1 &
 PIDS+=($!)
 
 echo "== type-check"

@@ -1,4 +1,6 @@
 import * as demoUsers from './20261201000100-demo-users';
+import * as standardLibrary from './20261201000200-standard-library';
+import * as demoScenario from './20261201000300-demo-scenario';
 
 export interface Seeder {
   name: string;
@@ -7,4 +9,4 @@ export interface Seeder {
 }
 
 /** Seeders in order; tracked in their own table, so each runs once per database. */
-export const seeders: Seeder[] = [demoUsers];
+export const seeders: Seeder[] = [demoUsers, standardLibrary, demoScenario];

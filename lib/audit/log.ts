@@ -72,3 +72,17 @@ export async function verifyAuditChain(): Promise<ChainStatus> {
   }
   return { intact: true, events: count };
 }
+
+/** Newest first, with actor names. */
+export async function listAuditEvents({ page, pageSize }: { page: number; pageSize: number }) {
+  const { AuditEvent, User } = db();
+  const { rows, count } = await AuditEvent.findAndCountAll({ order: [['id', 'DESC']], limit: pageSize, offset: (page - 1) * pageSize });
+  const names = new Map((await User.findAll({ attributes: ['id', 'email'] })).map((u) => [u.id, u.email]));
+  return {
+    items: rows.map((e) => ({
+      id: e.id, at: e.at, actor: e.actorId ? names.get(e.actorId) ?? `user ${e.actorId}` : 'system', action: e.action,
+      entity: `${e.entityType} ${e.entityId}`, beforeHash: e.beforeHash, afterHash: e.afterHash, details: e.details, hash: e.hash,
+    })),
+    total: count, page, pageSize,
+  };
+}

@@ -45,6 +45,11 @@ export interface CompiledDefinition {
   limits: CompiledLimit[];
   /** Evaluation on plain numbers in declared units (the fast path). */
   run(values: ArrayLike<number>): EvaluationResult;
+  /**
+   * Batch evaluation on a flat array of rows (inputs in declared order), reusing one work array:
+   * outputs come back flat in declared order; rows with warnings or errors are listed sparsely.
+   */
+  runMany(rows: Float64Array, count: number): { outputs: Float64Array; warnings: Map<number, Warning[]>; errors: Map<number, EvaluationError> };
   /** Evaluation from API-style inputs: numbers in declared units or { value, unit }. */
   evaluate(inputs: Record<string, unknown>): EvaluationResult;
   /** Turns API-style inputs into numbers in declared units; `path` prefixes error paths. */
@@ -148,6 +153,43 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
   const inputUnits = definition.inputs.map((i) => i.unit);
   const nSlots = slots.size;
 
+  const runMany = (rows: Float64Array, count: number) => {
+    const nIn = inputSymbols.length;
+    const nOut = outputSymbols.length;
+    const v = new Float64Array(nSlots);
+    const outputs = new Float64Array(count * nOut);
+    const warningsByRow = new Map<number, Warning[]>();
+    const errors = new Map<number, EvaluationError>();
+    let row = 0;
+    let pending: Warning[] | null = null;
+    const W: WarnFn = (index, value) => {
+      const lim = limits[index];
+      const w: Warning = { symbol: lim.symbol, value, message: limitMessage(lim, value) };
+      if (lim.min !== undefined) w.min = lim.min;
+      if (lim.max !== undefined) w.max = lim.max;
+      if (lim.action === 'refuse') throw new EvaluationError('refused', `${w.message}. This limit is marked hard: no result is given.`, lim.symbol, [...(pending ?? []), w]);
+      (pending ??= []).push(w);
+    };
+    for (row = 0; row < count; row++) {
+      pending = null;
+      for (let i = 0; i < nIn; i++) v[i] = rows[row * nIn + i];
+      try {
+        run(v, W, FUNCTION_IMPLS as never, solveStep, tableStep);
+        for (let i = 0; i < nOut; i++) {
+          const value = v[outputSlots[i]];
+          if (!Number.isFinite(value)) throw new EvaluationError('not-finite', `${outputSymbols[i]} cannot be computed for these inputs (the formula gives ${value}); check them against the validity ranges`, outputSymbols[i], pending ?? []);
+          outputs[row * nOut + i] = value;
+        }
+      } catch (err) {
+        if (!(err instanceof EvaluationError)) throw err;
+        errors.set(row, err);
+        for (let i = 0; i < nOut; i++) outputs[row * nOut + i] = NaN;
+      }
+      if (pending) warningsByRow.set(row, pending);
+    }
+    return { outputs, warnings: warningsByRow, errors };
+  };
+
   const runValues = (values: ArrayLike<number>): EvaluationResult => {
     const v = new Float64Array(nSlots);
     for (let i = 0; i < inputSymbols.length; i++) v[i] = values[i];
@@ -219,6 +261,7 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
     outputSymbols,
     limits,
     run: runValues,
+    runMany,
     readInputs,
     evaluate: (inputs) => runValues(readInputs(inputs, 'inputs')),
     source,

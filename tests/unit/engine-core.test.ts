@@ -3,7 +3,7 @@ import {
   compileDefinition, compareDefinitions, contentHash, canonicalJson, validateVersion, convert, brent, interpolate,
   EvaluationError, InputError, DefinitionError, type Definition,
 } from '@/lib/engine';
-import { blasius, pohlhausenNusseltCoefficient } from '../support/similarity';
+import { blasius, pohlhausenNusseltCoefficient } from '@/validation/reference/similarity';
 
 const base = (over: Partial<Definition>): Definition => ({
   schemaVersion: 1, title: 'Test correlation', summary: 'A definition built for a test', category: 'external-flow',

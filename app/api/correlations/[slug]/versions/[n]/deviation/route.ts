@@ -1,0 +1,9 @@
+import { z } from 'zod';
+import { route } from '@/lib/http/handler';
+import { versionPath } from '@/lib/api/contract';
+import { deviationFromPrevious } from '@/lib/governance/review';
+
+const query = z.object({ sweep: z.string().max(32).optional(), output: z.string().max(32).optional() }).strict();
+
+export const GET = route({ access: { scope: 'read' }, params: versionPath, query }, async ({ caller, params, query }) =>
+  deviationFromPrevious({ actor: caller!.user, slug: params.slug, version: params.n, sweep: query.sweep, output: query.output }));

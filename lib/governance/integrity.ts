@@ -1,0 +1,53 @@
+import { db, type CorrelationVersion } from '@/models';
+import { AppError } from '@/lib/http/errors';
+import { appendAuditEvent } from '@/lib/audit/log';
+import { contentHash } from '@/lib/engine/canonical';
+import type { CheckCase } from '@/lib/engine/types';
+
+/** Checked versions: id → when the check ran, the hash it confirmed and the exact stored definition text. */
+const verified = new Map<number, { at: number; hash: string; text: unknown }>();
+const RECHECK_MS = 30_000;
+
+async function raiseAlarm(v: CorrelationVersion, slug: string, actual: string) {
+  const { sequelize } = db();
+  await sequelize.transaction((transaction) => appendAuditEvent({ transaction, event: {
+    actorId: null, action: 'integrity.hash-mismatch', entityType: 'version', entityId: `${slug}@${v.version}`,
+    beforeHash: v.contentHash, afterHash: actual,
+    details: { alarm: 'Stored definition or check cases do not match the frozen content hash; the version is not served.' },
+  } }));
+  console.error(`INTEGRITY ALARM: ${slug}@${v.version} content hash ${v.contentHash} but content hashes to ${actual}`);
+}
+
+/**
+ * Re-computes a frozen version's content hash from what the database holds now. The full check
+ * (definition and check cases) runs at most every RECHECK_MS per version and process, and at once
+ * whenever the stored definition text differs from the one last verified. A mismatch raises an alarm
+ * in the audit trail and refuses.
+ */
+export async function verifyFrozen(v: CorrelationVersion, slug: string): Promise<void> {
+  if (!v.contentHash) return;
+  const text = v.getDataValue('definition');
+  const seen = verified.get(v.id);
+  if (seen && seen.hash === v.contentHash && seen.text === text && Date.now() - seen.at < RECHECK_MS) return;
+  const { CheckCaseRow } = db();
+  const rows = await CheckCaseRow.findAll({ where: { versionId: v.id }, order: [['position', 'ASC']] });
+  const actual = contentHash(v.definition, rows.map((r) => r.body as CheckCase));
+  if (actual !== v.contentHash) {
+    verified.delete(v.id);
+    await raiseAlarm(v, slug, actual);
+    throw new AppError('conflict:content-hash-mismatch', `Version ${v.version} of "${slug}" does not match its content hash and is not served; the incident is recorded in the audit trail.`);
+  }
+  verified.set(v.id, { at: Date.now(), hash: v.contentHash, text });
+}
+
+export async function assertIntact({ slug, version }: { slug: string; version: number }) {
+  const { Correlation, CorrelationVersion } = db();
+  const c = await Correlation.findOne({ where: { slug } });
+  const v = c && await CorrelationVersion.findOne({ where: { correlationId: c.id, version } });
+  if (v) await verifyFrozen(v, slug);
+}
+
+/** For tests: forget what was verified so the next use re-checks at once. */
+export function forgetVerified() {
+  verified.clear();
+}

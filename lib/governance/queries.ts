@@ -1,0 +1,185 @@
+import { Op, QueryTypes, type WhereOptions } from 'sequelize';
+import { db, type CorrelationVersion, type VersionStatus } from '@/models';
+import { AppError } from '@/lib/http/errors';
+import type { AuthUser } from '@/lib/auth/users';
+import type { CheckCase, Definition } from '@/lib/engine/types';
+import { canSeeVersion, PUBLISHED } from './access';
+import { definitionTex, validitySummary } from './serialize';
+import { verifyFrozen } from './integrity';
+
+export interface ListQuery {
+  q?: string;
+  category?: string;
+  status?: VersionStatus | 'any';
+  situation?: string;
+  sort?: 'title' | 'category' | 'updated' | 'slug';
+  dir?: 'asc' | 'desc';
+  page: number;
+  pageSize: number;
+}
+
+const SORT_COLUMN: Record<NonNullable<ListQuery['sort']>, string> = { title: 'c.title', category: 'c.category', updated: 'c.updated_at', slug: 'c.slug' };
+
+/**
+ * The library list. One SQL query with the latest approved version and the newest version the
+ * caller may see, filtered, sorted and paged in the database (fast with thousands of entries).
+ */
+export async function listCorrelations({ actor, query }: { actor: AuthUser | null; query: ListQuery }) {
+  const { sequelize } = db();
+  const isApprover = actor?.roles.includes('approver') ?? false;
+  const visible = `(v.status IN ('approved','superseded','withdrawn') OR v.author_id = :me OR :approver = 1)`;
+  const where: string[] = [`EXISTS (SELECT 1 FROM correlation_versions v WHERE v.correlation_id = c.id AND ${visible})`];
+  const repl: Record<string, unknown> = { me: actor?.id ?? 0, approver: isApprover ? 1 : 0 };
+  if (query.q) {
+    where.push('(c.title LIKE :q OR c.slug LIKE :q OR c.situation LIKE :q OR c.tags LIKE :q)');
+    repl.q = `%${query.q.replace(/[%_\\]/g, (m) => `\\${m}`)}%`;
+  }
+  if (query.category) { where.push('c.category = :category'); repl.category = query.category; }
+  if (query.situation) { where.push('c.situation = :situation'); repl.situation = query.situation; }
+  if (query.status && query.status !== 'any') {
+    where.push(`EXISTS (SELECT 1 FROM correlation_versions v WHERE v.correlation_id = c.id AND v.status = :status AND ${visible})`);
+    repl.status = query.status;
+  }
+  const whereSql = where.join(' AND ');
+  const order = `${SORT_COLUMN[query.sort ?? 'title']} ${query.dir === 'desc' ? 'DESC' : 'ASC'}, c.id ASC`;
+  const [{ total }] = await sequelize.query<{ total: number }>(`SELECT COUNT(*) AS total FROM correlations c WHERE ${whereSql}`, { replacements: repl, type: QueryTypes.SELECT });
+  const rows = await sequelize.query<{
+    id: number; slug: string; title: string; category: string; situation: string; tags: string; updated_at: Date;
+    approved_version: number | null; approved_definition: string | null; approved_at: Date | null; latest_version: number; latest_status: VersionStatus;
+  }>(`
+    SELECT c.id, c.slug, c.title, c.category, c.situation, c.tags, c.updated_at,
+      a.version AS approved_version, a.definition AS approved_definition, a.approved_at,
+      l.version AS latest_version, l.status AS latest_status
+    FROM correlations c
+    LEFT JOIN correlation_versions a ON a.correlation_id = c.id AND a.status = 'approved'
+    LEFT JOIN correlation_versions l ON l.id = (
+      SELECT v.id FROM correlation_versions v WHERE v.correlation_id = c.id AND ${visible} ORDER BY v.version DESC LIMIT 1)
+    WHERE ${whereSql}
+    ORDER BY ${order}
+    LIMIT :limit OFFSET :offset`, {
+    replacements: { ...repl, limit: query.pageSize, offset: (query.page - 1) * query.pageSize }, type: QueryTypes.SELECT,
+  });
+  return {
+    items: rows.map((r) => ({
+      slug: r.slug, title: r.title, category: r.category, situation: r.situation, tags: JSON.parse(r.tags ?? '[]') as string[],
+      latestApprovedVersion: r.approved_version ?? null,
+      approvedAt: r.approved_at ?? null,
+      latestVersion: r.latest_version, latestStatus: r.latest_status,
+      validity: r.approved_definition ? validitySummary(JSON.parse(r.approved_definition) as Definition) : '',
+      updatedAt: r.updated_at,
+    })),
+    total: Number(total), page: query.page, pageSize: query.pageSize,
+  };
+}
+
+export async function findCorrelation(slug: string) {
+  const { Correlation } = db();
+  const c = await Correlation.findOne({ where: { slug } });
+  if (!c) throw new AppError('not_found:correlation', `No correlation "${slug}".`);
+  return c;
+}
+
+/** A correlation with the versions the caller may see. */
+export async function getCorrelation({ actor, slug }: { actor: AuthUser | null; slug: string }) {
+  const { CorrelationVersion, User } = db();
+  const c = await findCorrelation(slug);
+  const versions = (await CorrelationVersion.findAll({ where: { correlationId: c.id }, order: [['version', 'DESC']] })).filter((v) => canSeeVersion(actor, v));
+  if (versions.length === 0) throw new AppError('not_found:correlation', `No correlation "${slug}".`);
+  const users = new Map((await User.findAll({ where: { id: [...new Set(versions.map((v) => v.authorId))] }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
+  const approved = versions.find((v) => v.status === 'approved');
+  return {
+    slug: c.slug, title: c.title, category: c.category, situation: c.situation, tags: c.tags,
+    latestApprovedVersion: approved?.version ?? null,
+    versions: versions.map((v) => ({
+      version: v.version, status: v.status, contentHash: v.contentHash, author: users.get(v.authorId) ?? '?', authorId: v.authorId,
+      createdAt: v.createdAt, submittedAt: v.submittedAt, ...(v.approvedAt ? { approvedAt: v.approvedAt } : {}),
+      ...(v.withdrawnAt ? { withdrawnAt: v.withdrawnAt, withdrawnReason: v.withdrawnReason } : {}),
+    })),
+  };
+}
+
+/** Resolves which version to use: an explicit number, or the approved one. Visibility applies. */
+export async function resolveVersion({ actor, slug, version }: { actor: AuthUser | null; slug: string; version?: number }) {
+  const { CorrelationVersion } = db();
+  const c = await findCorrelation(slug);
+  const where: WhereOptions = version !== undefined ? { correlationId: c.id, version } : { correlationId: c.id, status: 'approved' };
+  const v = await CorrelationVersion.findOne({ where });
+  if (!v || !canSeeVersion(actor, v)) {
+    throw version !== undefined
+      ? new AppError('not_found:version', `Correlation "${slug}" has no version ${version} you can use.`)
+      : new AppError('not_found:approved-version', `Correlation "${slug}" has no approved version; pin a version explicitly.`);
+  }
+  return { correlation: c, version: v };
+}
+
+export async function checkCasesOfVersion(versionId: number): Promise<CheckCase[]> {
+  const { CheckCaseRow } = db();
+  return (await CheckCaseRow.findAll({ where: { versionId }, order: [['position', 'ASC']] })).map((r) => r.body as CheckCase);
+}
+
+/** Everything a version page and the API's version answer show. Frozen versions are integrity-checked. */
+export async function getVersionDetail({ actor, slug, version }: { actor: AuthUser | null; slug: string; version: number }) {
+  const { SignOff, VersionComment, ValidationRun, User } = db();
+  const { correlation, version: v } = await resolveVersion({ actor, slug, version });
+  await verifyFrozen(v, slug);
+  const checkCases = await checkCasesOfVersion(v.id);
+  const [signOffs, comments, run] = await Promise.all([
+    SignOff.findAll({ where: { versionId: v.id }, order: [['id', 'ASC']] }),
+    VersionComment.findAll({ where: { versionId: v.id }, order: [['id', 'ASC']] }),
+    ValidationRun.findOne({ where: { versionId: v.id }, order: [['id', 'DESC']] }),
+  ]);
+  const ids = [...new Set([v.authorId, ...signOffs.map((s) => s.userId), ...comments.map((c) => c.userId)])];
+  const names = new Map((await User.findAll({ where: { id: ids }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
+  const definition = v.definition as Definition;
+  return {
+    slug, title: correlation.title, version: v.version, status: v.status, contentHash: v.contentHash,
+    frozen: v.status !== 'draft', author: names.get(v.authorId) ?? '?', authorId: v.authorId,
+    createdAt: v.createdAt, submittedAt: v.submittedAt, approvedAt: v.approvedAt, withdrawnAt: v.withdrawnAt, withdrawnReason: v.withdrawnReason,
+    definition, checkCases,
+    validation: run ? (run.report as object) : null,
+    tex: safeTex(definition),
+    signOffs: signOffs.map((s) => ({ decision: s.decision, by: names.get(s.userId) ?? '?', at: s.createdAt, comment: s.comment, meaning: s.meaning, contentHash: s.contentHash })),
+    comments: comments.map((c) => ({ by: names.get(c.userId) ?? '?', at: c.createdAt, body: c.body })),
+  };
+}
+
+function safeTex(definition: Definition): Record<string, string> {
+  try {
+    return definitionTex(definition);
+  } catch {
+    return {};
+  }
+}
+
+/** The previously approved (or superseded) version before `version`, for review diffs. */
+export async function previousApproved({ slug, before }: { slug: string; before: number }): Promise<CorrelationVersion | null> {
+  const { CorrelationVersion } = db();
+  const c = await findCorrelation(slug);
+  return CorrelationVersion.findOne({
+    where: { correlationId: c.id, version: { [Op.lt]: before }, status: { [Op.in]: ['approved', 'superseded', 'withdrawn'] } },
+    order: [['version', 'DESC']],
+  });
+}
+
+/** Versions waiting for review, oldest first, for approvers. */
+export async function reviewQueue({ actor }: { actor: AuthUser }) {
+  const { CorrelationVersion, Correlation, User } = db();
+  const rows = await CorrelationVersion.findAll({ where: { status: 'in_review' }, include: [{ model: Correlation, as: 'correlation' }], order: [['submittedAt', 'ASC']] });
+  const names = new Map((await User.findAll({ attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
+  return rows.map((v) => ({
+    slug: v.correlation!.slug, title: v.correlation!.title, version: v.version, author: names.get(v.authorId) ?? '?',
+    submittedAt: v.submittedAt, contentHash: v.contentHash, ownVersion: v.authorId === actor.id,
+  }));
+}
+
+/** The author's own drafts and returned versions. */
+export async function authorWork({ actor }: { actor: AuthUser }) {
+  const { CorrelationVersion, Correlation } = db();
+  const rows = await CorrelationVersion.findAll({
+    where: { authorId: actor.id, status: { [Op.in]: ['draft', 'in_review', 'returned'] } },
+    include: [{ model: Correlation, as: 'correlation' }], order: [['updatedAt', 'DESC']],
+  });
+  return rows.map((v) => ({ slug: v.correlation!.slug, title: v.correlation!.title, version: v.version, status: v.status, updatedAt: v.updatedAt }));
+}
+
+export { PUBLISHED };

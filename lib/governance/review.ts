@@ -1,0 +1,50 @@
+import { AppError } from '@/lib/http/errors';
+import type { AuthUser } from '@/lib/auth/users';
+import { compareDefinitions, type Definition } from '@/lib/engine';
+import { previousApproved, resolveVersion } from './queries';
+
+function boundsOf(def: Definition, symbol: string) {
+  const lims = (def.validity ?? []).filter((l) => l.symbol === symbol);
+  return { min: lims.find((l) => l.min !== undefined)?.min, max: lims.find((l) => l.max !== undefined)?.max };
+}
+
+/** A representative value of an input: the (geometric, when wide) middle of its range, else 1. */
+export function typicalValue(def: Definition, symbol: string): number {
+  const { min, max } = boundsOf(def, symbol);
+  if (min !== undefined && max !== undefined) return min > 0 && max / min >= 100 ? Math.sqrt(min * max) : (min + max) / 2;
+  if (min !== undefined) return min > 0 ? min * 10 : min + 1;
+  if (max !== undefined) return max > 0 ? max / 10 : max - 1;
+  return 1;
+}
+
+/**
+ * Numerical difference of a version from the previously approved one across the validity range of
+ * one input (the first bounded one unless chosen), the others held at typical values.
+ */
+export async function deviationFromPrevious({ actor, slug, version, sweep, output }: { actor: AuthUser; slug: string; version: number; sweep?: string; output?: string }) {
+  const { version: v } = await resolveVersion({ actor, slug, version });
+  const prev = await previousApproved({ slug, before: version });
+  if (!prev) return { previous: null, comparison: null, message: 'This is the first version to be approved: there is nothing to compare with.' };
+  const cur = v.definition as Definition;
+  const old = prev.definition as Definition;
+  const common = cur.inputs.map((i) => i.symbol).filter((s) => old.inputs.some((o) => o.symbol === s));
+  if (common.length !== cur.inputs.length || common.length !== old.inputs.length) {
+    return { previous: prev.version, comparison: null, message: 'The inputs changed between versions, so the two cannot be compared point by point.' };
+  }
+  const bounded = common.filter((s) => { const b = boundsOf(cur, s); return b.min !== undefined && b.max !== undefined; });
+  const sweepSymbol = sweep ?? bounded[0] ?? common[0];
+  if (!common.includes(sweepSymbol)) throw new AppError('invalid:sweep', `"${sweepSymbol}" is not an input of both versions.`);
+  const outSymbol = output ?? cur.outputs[0].symbol;
+  if (!old.outputs.some((o) => o.symbol === outSymbol)) {
+    return { previous: prev.version, comparison: null, message: `The previous version has no output "${outSymbol}".` };
+  }
+  const fixed = Object.fromEntries(common.filter((s) => s !== sweepSymbol).map((s) => [s, typicalValue(cur, s)]));
+  const { min, max } = boundsOf(cur, sweepSymbol);
+  const from = min !== undefined && (min > 0 || max === undefined) ? min : min ?? (max !== undefined ? max / 1000 : 1);
+  const to = max ?? (from > 0 ? from * 1000 : from + 1000);
+  const comparison = compareDefinitions({
+    items: [{ label: `version ${prev.version}`, definition: old }, { label: `version ${version}`, definition: cur }],
+    sweep: sweepSymbol, output: outSymbol, fixed, from: from === 0 && to > 0 ? to / 1e6 : from, to, points: 120,
+  });
+  return { previous: prev.version, fixed, comparison, message: null };
+}

@@ -1,0 +1,154 @@
+/**
+ * Independent reference values for the standard library's check cases, computed here and not by
+ * Correlary's engine: similarity solutions solved numerically (./similarity.ts), Colebrook solved by
+ * fixed-point iteration, averages obtained by quadrature of the local laws, the Graetz eigenvalue,
+ * and published equations re-implemented by hand in plain TypeScript (not from the definition files).
+ * A check case whose source is "numerical" names its key here in its locator
+ * ("validation/reference/formulas.ts#<key>"); validation/library.test.ts recomputes it.
+ */
+import { blasius, graetzNusseltUWT, ostrachG, pohlhausenNusseltCoefficient, powerLawWallNusseltCoefficient, thermalThicknessEta } from './similarity';
+
+type Inputs = Record<string, number>;
+type Values = Record<string, number>;
+
+/** Composite Simpson's rule on [a, b] with n (even) intervals. */
+export function simpson(f: (x: number) => number, a: number, b: number, n = 4000): number {
+  const h = (b - a) / n;
+  let s = f(a) + f(b);
+  for (let i = 1; i < n; i++) s += (i % 2 ? 4 : 2) * f(a + i * h);
+  return (s * h) / 3;
+}
+
+/** Colebrook (1939) by fixed-point iteration on x = 1/√f, independent of the engine's Brent solve. */
+export function colebrook(re: number, eps: number): number {
+  let x = 8;
+  for (let i = 0; i < 300; i++) x = -2 * Math.log10(eps / 3.7 + (2.51 * x) / re);
+  return 1 / (x * x);
+}
+
+const petukhovF = (re: number) => (0.79 * Math.log(re) - 1.64) ** -2;
+
+/** Gnielinski (1976) with the Petukhov smooth-tube friction factor, written out independently. */
+export function gnielinski(re: number, pr: number): number {
+  const f = petukhovF(re);
+  return ((f / 8) * (re - 1000) * pr) / (1 + 12.7 * Math.sqrt(f / 8) * (pr ** (2 / 3) - 1));
+}
+
+/** Mean over the heated part (ξ0..1 of the length) of a local Nusselt law: Nu_L = 1/(1−ξ0) ∫ Nu_x(ξ)/ξ dξ. */
+function averageOfLocal(local: (xi: number) => number, xi0: number): number {
+  // ξ = ξ0 + (1 − ξ0) s³ removes the integrable singularity at the start of heating (and at 0).
+  const span = 1 - xi0;
+  const g = (s: number) => (s === 0 ? 0 : (local(xi0 + span * s ** 3) / (xi0 + span * s ** 3)) * 3 * span * s * s);
+  return simpson(g, 0, 1, 4000) / span;
+}
+
+const laminarLocal = (re: number, pr: number) => 0.332 * Math.sqrt(re) * Math.cbrt(pr);
+const turbulentLocal = (re: number, pr: number) => 0.0296 * re ** 0.8 * Math.cbrt(pr);
+const RE_C = 5e5;
+
+export const REFERENCES: Record<string, (i: Inputs) => Values> = {
+  'pohlhausen-local': ({ Re_x, Pr }) => ({ Nu_x: pohlhausenNusseltCoefficient(Pr) * Math.sqrt(Re_x) }),
+  'pohlhausen-average': ({ Re_L, Pr }) => ({ Nu_L: 2 * pohlhausenNusseltCoefficient(Pr) * Math.sqrt(Re_L) }),
+  'uniform-flux-local': ({ Re_x, Pr }) => ({ Nu_x: powerLawWallNusseltCoefficient(Pr, 0.5) * Math.sqrt(Re_x) }),
+  // ΔT ∝ x^½ under uniform flux, so the length-mean ΔT is 2/3 of ΔT(L): Nu_L = 1.5 Nu_x(L).
+  'uniform-flux-average': ({ Re_L, Pr }) => ({ Nu_L: 1.5 * powerLawWallNusseltCoefficient(Pr, 0.5) * Math.sqrt(Re_L) }),
+  'blasius-thickness': ({ x, Re_x, Pr }) => ({ delta: (blasius().eta99 * x) / Math.sqrt(Re_x), delta_t: (thermalThicknessEta(Pr) * x) / Math.sqrt(Re_x) }),
+  'blasius-displacement': ({ Re_x }) => ({ deltastar_over_x: blasius().displacement / Math.sqrt(Re_x) }),
+  'blasius-momentum': ({ Re_x }) => ({ theta_over_x: blasius().momentum / Math.sqrt(Re_x) }),
+  'blasius-cf-local': ({ Re_x }) => ({ Cf_x: (2 * blasius().fpp0) / Math.sqrt(Re_x) }),
+  'blasius-cf-average': ({ Re_L }) => ({ Cf_L: (4 * blasius().fpp0) / Math.sqrt(Re_L) }),
+  'turbulent-nu-average-quadrature': ({ Re_L, Pr }) => ({ Nu_L: averageOfLocal((xi) => turbulentLocal(Re_L * xi, Pr), 0) }),
+  'mixed-nu-average-quadrature': ({ Re_L, Pr }) => ({
+    Nu_L: averageOfLocal((xi) => (Re_L * xi <= RE_C ? laminarLocal(Re_L * xi, Pr) : turbulentLocal(Re_L * xi, Pr)), 0),
+  }),
+  'turbulent-cf-average-quadrature': ({ Re_L }) => ({ Cf_L: simpson((s) => (s === 0 ? 0 : 0.0592 * (Re_L * s ** 3) ** -0.2 * 3 * s * s), 0, 1) }),
+  'mixed-cf-average-quadrature': ({ Re_L }) => ({
+    Cf_L: simpson((s) => { if (s === 0) return 0; const re = Re_L * s ** 3; return (re <= RE_C ? 0.664 / Math.sqrt(re) : 0.0592 * re ** -0.2) * 3 * s * s; }, 0, 1, 20000),
+  }),
+  'unheated-laminar-average-quadrature': ({ Re_L, Pr, xi_over_L }) => ({
+    Nu_L: averageOfLocal((xi) => laminarLocal(Re_L * xi, Pr) / (1 - (xi_over_L / xi) ** 0.75) ** (1 / 3), xi_over_L),
+  }),
+  'unheated-turbulent-average-quadrature': ({ Re_L, Pr, xi_over_L }) => ({
+    Nu_L: averageOfLocal((xi) => turbulentLocal(Re_L * xi, Pr) / (1 - (xi_over_L / xi) ** 0.9) ** (1 / 9), xi_over_L),
+  }),
+  colebrook: ({ Re_D, eps_D }) => ({ f: colebrook(Re_D, eps_D ?? 0) }),
+  'gnielinski-independent': ({ Re_D, Pr }) => ({ Nu_D: gnielinski(Re_D, Pr) }),
+  'graetz-uwt': () => ({ Nu_D: graetzNusseltUWT() }),
+  'ostrach-laminar-average': ({ Ra_L, Pr }) => ({ Nu_L: (4 / 3) * ostrachG(Pr) * (Ra_L / Pr / 4) ** 0.25 }),
+};
+
+/** Reads the reference key out of a check-case locator such as "validation/reference/formulas.ts#colebrook". */
+export function referenceKey(locator: string | undefined): string | null {
+  const m = /validation\/reference\/formulas\.ts#([a-z0-9-]+)/.exec(locator ?? '');
+  return m ? m[1] : null;
+}
+
+/**
+ * Published equations re-implemented by hand, one per library slug, for check cases labelled
+ * "equation re-implemented independently". They guard against transcription errors in the
+ * definition files: the two are written separately, in different notations.
+ */
+const hilpert = (re: number, pr: number) => {
+  const rows: [number, number, number][] = [[4, 0.989, 0.33], [40, 0.911, 0.385], [4000, 0.683, 0.466], [40000, 0.193, 0.618], [Infinity, 0.027, 0.805]];
+  const [, c, m] = rows.find(([upper]) => re < upper)!;
+  return c * re ** m * Math.cbrt(pr);
+};
+const zukauskas = (re: number, pr: number, prs: number) => {
+  const rows: [number, number, number][] = [[40, 0.75, 0.4], [1000, 0.51, 0.5], [2e5, 0.26, 0.6], [Infinity, 0.076, 0.7]];
+  const [, c, m] = rows.find(([upper]) => re < upper)!;
+  return c * re ** m * pr ** (pr <= 10 ? 0.37 : 0.36) * (pr / prs) ** 0.25;
+};
+const churchillFriction = (re: number, eps: number) => {
+  const a = (2.457 * Math.log(1 / ((7 / re) ** 0.9 + 0.27 * eps))) ** 16;
+  const b = (37530 / re) ** 16;
+  return 8 * ((8 / re) ** 12 + (a + b) ** -1.5) ** (1 / 12);
+};
+const R_AIR = 8.314462618 / 0.0289647;
+
+Object.assign(REFERENCES, {
+  'flat-plate-laminar-local': ({ Re_x, Pr }: Inputs) => ({ Nu_x: laminarLocal(Re_x, Pr) }),
+  'flat-plate-turbulent-local': ({ Re_x, Pr }: Inputs) => ({ Nu_x: turbulentLocal(Re_x, Pr) }),
+  'flat-plate-laminar-local-churchill-ozoe': ({ Re_x, Pr }: Inputs) => ({ Nu_x: (0.3387 * Math.sqrt(Re_x) * Math.cbrt(Pr)) / (1 + (0.0468 / Pr) ** (2 / 3)) ** 0.25 }),
+  'flat-plate-unheated-start-laminar-local': ({ Re_x, Pr, xi_over_x }: Inputs) => ({ Nu_x: laminarLocal(Re_x, Pr) / Math.cbrt(1 - xi_over_x ** 0.75) }),
+  'flat-plate-unheated-start-turbulent-local': ({ Re_x, Pr, xi_over_x }: Inputs) => ({ Nu_x: turbulentLocal(Re_x, Pr) / (1 - xi_over_x ** 0.9) ** (1 / 9) }),
+  'boundary-layer-turbulent-thickness': ({ Re_x }: Inputs) => ({ delta_over_x: 0.37 / Re_x ** 0.2 }),
+  'skin-friction-turbulent-local': ({ Re_x }: Inputs) => ({ Cf_x: 0.0592 / Re_x ** 0.2 }),
+  'cylinder-crossflow-churchill-bernstein': ({ Re_D, Pr }: Inputs) => ({
+    Nu_D: 0.3 + ((0.62 * Math.sqrt(Re_D) * Math.cbrt(Pr)) / (1 + (0.4 / Pr) ** (2 / 3)) ** 0.25) * (1 + (Re_D / 282000) ** 0.625) ** 0.8,
+  }),
+  'cylinder-crossflow-hilpert': ({ Re_D, Pr }: Inputs) => ({ Nu_D: hilpert(Re_D, Pr) }),
+  'cylinder-crossflow-zukauskas': ({ Re_D, Pr, Pr_s }: Inputs) => ({ Nu_D: zukauskas(Re_D, Pr, Pr_s) }),
+  'sphere-forced-whitaker': ({ Re_D, Pr, mu_ratio }: Inputs) => ({ Nu_D: 2 + (0.4 * Math.sqrt(Re_D) + 0.06 * Re_D ** (2 / 3)) * Pr ** 0.4 * mu_ratio ** 0.25 }),
+  'sphere-forced-whitaker-gas': ({ Re_D, Pr }: Inputs) => ({ Nu_D: 2 + (0.4 * Math.sqrt(Re_D) + 0.06 * Re_D ** (2 / 3)) * Pr ** 0.4 }),
+  'sphere-forced-ranz-marshall': ({ Re_D, Pr }: Inputs) => ({ Nu_D: 2 + 0.6 * Math.sqrt(Re_D) * Math.cbrt(Pr) }),
+  'pipe-laminar-entry-hausen': ({ Re_D, Pr, L_over_D }: Inputs) => { const gz = (Re_D * Pr) / L_over_D; return { Nu_D: 3.66 + (0.0668 * gz) / (1 + 0.04 * gz ** (2 / 3)) }; },
+  'pipe-laminar-entry-sieder-tate': ({ Re_D, Pr, L_over_D, mu_ratio }: Inputs) => ({ Nu_D: 1.86 * Math.cbrt((Re_D * Pr) / L_over_D) * mu_ratio ** 0.14 }),
+  'pipe-turbulent-dittus-boelter-heating': ({ Re_D, Pr }: Inputs) => ({ Nu_D: 0.023 * Re_D ** 0.8 * Pr ** 0.4 }),
+  'pipe-turbulent-dittus-boelter-cooling': ({ Re_D, Pr }: Inputs) => ({ Nu_D: 0.023 * Re_D ** 0.8 * Pr ** 0.3 }),
+  'pipe-turbulent-sieder-tate': ({ Re_D, Pr, mu_ratio }: Inputs) => ({ Nu_D: 0.027 * Re_D ** 0.8 * Math.cbrt(Pr) * mu_ratio ** 0.14 }),
+  'pipe-turbulent-petukhov': ({ Re_D, Pr }: Inputs) => { const f = petukhovF(Re_D); return { Nu_D: ((f / 8) * Re_D * Pr) / (1.07 + 12.7 * Math.sqrt(f / 8) * (Pr ** (2 / 3) - 1)) }; },
+  'friction-factor-laminar': ({ Re_D }: Inputs) => ({ f: 64 / Re_D }),
+  'friction-factor-petukhov': ({ Re_D }: Inputs) => ({ f: petukhovF(Re_D) }),
+  'friction-factor-haaland': ({ Re_D, eps_D }: Inputs) => ({ f: (-1.8 * Math.log10((eps_D / 3.7) ** 1.11 + 6.9 / Re_D)) ** -2 }),
+  'friction-factor-swamee-jain': ({ Re_D, eps_D }: Inputs) => ({ f: 0.25 / Math.log10(eps_D / 3.7 + 5.74 / Re_D ** 0.9) ** 2 }),
+  'friction-factor-churchill': ({ Re_D, eps_D }: Inputs) => ({ f: churchillFriction(Re_D, eps_D) }),
+  'friction-factor-blasius': ({ Re_D }: Inputs) => ({ f: 0.316 / Re_D ** 0.25 }),
+  'vertical-plate-churchill-chu': ({ Ra_L, Pr }: Inputs) => ({ Nu_L: (0.825 + (0.387 * Ra_L ** (1 / 6)) / (1 + (0.492 / Pr) ** (9 / 16)) ** (8 / 27)) ** 2 }),
+  'vertical-plate-churchill-chu-laminar': ({ Ra_L, Pr }: Inputs) => ({ Nu_L: 0.68 + (0.67 * Ra_L ** 0.25) / (1 + (0.492 / Pr) ** (9 / 16)) ** (4 / 9) }),
+  'horizontal-plate-hot-surface-up': ({ Ra_L }: Inputs) => ({ Nu_L: Ra_L <= 1e7 ? 0.54 * Ra_L ** 0.25 : 0.15 * Math.cbrt(Ra_L) }),
+  'horizontal-plate-hot-surface-down': ({ Ra_L }: Inputs) => ({ Nu_L: 0.52 * Ra_L ** 0.2 }),
+  'horizontal-cylinder-churchill-chu': ({ Ra_D, Pr }: Inputs) => ({ Nu_D: (0.6 + (0.387 * Ra_D ** (1 / 6)) / (1 + (0.559 / Pr) ** (9 / 16)) ** (8 / 27)) ** 2 }),
+  'sphere-natural-churchill': ({ Ra_D, Pr }: Inputs) => ({ Nu_D: 2 + (0.589 * Ra_D ** 0.25) / (1 + (0.469 / Pr) ** (9 / 16)) ** (4 / 9) }),
+  'enclosure-vertical-catton': ({ Ra_L, Pr, H_over_L }: Inputs) => ({
+    Nu_L: H_over_L < 2 ? 0.18 * ((Pr / (0.2 + Pr)) * Ra_L) ** 0.29 : 0.22 * ((Pr / (0.2 + Pr)) * Ra_L) ** 0.28 * H_over_L ** -0.25,
+  }),
+  'enclosure-vertical-macgregor-emery': ({ Ra_L, Pr, H_over_L }: Inputs) => ({ Nu_L: 0.42 * Ra_L ** 0.25 * Pr ** 0.012 * H_over_L ** -0.3 }),
+  'air-viscosity-sutherland': ({ T }: Inputs) => ({ mu: (1.458e-6 * T ** 1.5) / (T + 110.4) }),
+  'air-conductivity-sutherland': ({ T }: Inputs) => ({ k: 0.0241 * (T / 273) ** 1.5 * (273 + 194) / (T + 194) }),
+  'ideal-gas-density': ({ p, T, M }: Inputs) => ({ rho: (p * M) / (8.314462618 * T) }),
+  'gas-kinematic-property-pressure-correction': ({ nu_ref, alpha_ref, p_ref, p }: Inputs) => ({ nu: (nu_ref * p_ref) / p, alpha: (alpha_ref * p_ref) / p }),
+  'film-temperature': ({ T_s, T_inf }: Inputs) => ({ T_f: (T_s + T_inf) / 2 }),
+  'air-density-dry-ideal-gas-1bar': ({ T }: Inputs) => ({ rho: 1e5 / (R_AIR * T) }),
+  // U.S. Standard Atmosphere 1976 conductivity law k = 2.64638e-3 T^1.5 / (T + 245.4 × 10^(−12/T)).
+  'air-conductivity-ussa76': ({ T }: Inputs) => ({ k: (2.64638e-3 * T ** 1.5) / (T + 245.4 * 10 ** (-12 / T)) }),
+});
