@@ -146,10 +146,13 @@ describe('governance life cycle over HTTP against MariaDB', () => {
     await call(`/api/correlations/${slug}/versions/${authorsDraft}`, { cookie: author.cookie, method: 'PATCH', body: { definition: plateDefinition(0.3321), checkCases: plateCases(0.3321) } });
     await call(`/api/correlations/${slug}/versions/${authorsDraft}/submit`, { cookie: author.cookie, method: 'POST' });
     expect((await call(`/api/correlations/${slug}/versions/${authorsDraft}/decision`, { cookie: approver, body: { decision: 'approve', comment: 'ok', password: DEMO_PASSWORD } })).status).toBe(200);
-    const c = await call(`/api/correlations/${slug}`, { cookie: engineer });
+    const c = await call(`/api/correlations/${slug}`, { cookie: approver });
     expect(c.body.latestApprovedVersion).toBe(authorsDraft);
     const statuses = Object.fromEntries(c.body.versions.map((v: { version: number; status: string }) => [v.version, v.status]));
     expect(statuses).toEqual({ 1: 'superseded', [authorsDraft]: 'approved', [author2sDraft]: 'returned' });
+    // Engineers see published versions only: the returned one stays with its author and the approvers.
+    const seen = await call(`/api/correlations/${slug}`, { cookie: engineer });
+    expect(seen.body.versions.map((v: { version: number }) => v.version).sort()).toEqual([1, authorsDraft]);
   });
 
   it('withdraws with a reason, notifies users of the version, and never serves it as latest', async () => {
