@@ -1,4 +1,7 @@
 import { parse, type MathNode } from 'mathjs';
+import { symbolTex } from './tex-symbols';
+
+export { symbolTex };
 
 /**
  * The safe expression language: mathjs's parser, then a whitelist walk. Only numbers, declared
@@ -201,21 +204,6 @@ export function toJs(node: MathNode, slots: ReadonlyMap<string, number>): string
     }
   };
   return gen(node as unknown as AnyNode);
-}
-
-const GREEK: Record<string, string> = {
-  alpha: '\\alpha', beta: '\\beta', gamma: '\\gamma', delta: '\\delta', eps: '\\varepsilon', epsilon: '\\varepsilon',
-  zeta: '\\zeta', eta: '\\eta', theta: '\\theta', kappa: '\\kappa', lambda: '\\lambda', mu: '\\mu', nu: '\\nu',
-  xi: '\\xi', pi: '\\pi', rho: '\\rho', sigma: '\\sigma', tau: '\\tau', phi: '\\phi', chi: '\\chi', psi: '\\psi',
-  omega: '\\omega', Delta: '\\Delta', Gamma: '\\Gamma', Theta: '\\Theta',
-};
-
-/** TeX for a symbol: Re_D → \mathrm{Re}_{D}, delta_t → \delta_{t}, eps_D → \varepsilon_{D}. */
-export function symbolTex(name: string): string {
-  const [base, ...rest] = name.split('_');
-  const b = GREEK[base] ?? (base.length > 1 ? `\\mathrm{${base}}` : base);
-  const sub = rest.join(',');
-  return sub ? `${b}_{\\mathrm{${sub}}}` : b;
 }
 
 const PRECEDENCE: Record<string, number> = { or: 1, and: 2, larger: 3, smaller: 3, largerEq: 3, smallerEq: 3, equal: 3, unequal: 3, add: 4, subtract: 4, multiply: 5, divide: 5, unaryMinus: 6, unaryPlus: 6, not: 6, pow: 7 };

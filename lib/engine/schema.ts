@@ -41,7 +41,10 @@ function describe(e: ErrorObject): string {
 function toIssues(errors: ErrorObject[] | null | undefined): SchemaIssue[] {
   const seen = new Set<string>();
   const out: SchemaIssue[] = [];
+  // An anyOf failure already says what is needed; its branches' own errors would only repeat it.
+  const anyOfAt = new Set((errors ?? []).filter((e) => e.keyword === 'anyOf').map((e) => e.instancePath));
   for (const e of errors ?? []) {
+    if (e.schemaPath.includes('/anyOf/') && anyOfAt.has(e.instancePath)) continue;
     // "if/then" and "oneOf" wrappers repeat what their branches already said.
     if (e.keyword === 'if' || e.keyword === 'oneOf') continue;
     const issue = { pointer: e.instancePath || '/', message: describe(e) };

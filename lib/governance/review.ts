@@ -1,21 +1,8 @@
 import { AppError } from '@/lib/http/errors';
 import type { AuthUser } from '@/lib/auth/users';
 import { compareDefinitions, type Definition } from '@/lib/engine';
+import { boundsOf, typicalValue } from '@/lib/engine/ranges';
 import { previousApproved, resolveVersion } from './queries';
-
-function boundsOf(def: Definition, symbol: string) {
-  const lims = (def.validity ?? []).filter((l) => l.symbol === symbol);
-  return { min: lims.find((l) => l.min !== undefined)?.min, max: lims.find((l) => l.max !== undefined)?.max };
-}
-
-/** A representative value of an input: the (geometric, when wide) middle of its range, else 1. */
-export function typicalValue(def: Definition, symbol: string): number {
-  const { min, max } = boundsOf(def, symbol);
-  if (min !== undefined && max !== undefined) return min > 0 && max / min >= 100 ? Math.sqrt(min * max) : (min + max) / 2;
-  if (min !== undefined) return min > 0 ? min * 10 : min + 1;
-  if (max !== undefined) return max > 0 ? max / 10 : max - 1;
-  return 1;
-}
 
 /**
  * Numerical difference of a version from the previously approved one across the validity range of

@@ -1,0 +1,101 @@
+'use client';
+
+import Link from 'next/link';
+import { keepPreviousData, useQuery } from '@tanstack/react-query';
+import { useEffect, useState } from 'react';
+import { api } from '@/lib/client/api';
+import { StatusBadge } from '@/components/ui/status-badge';
+
+interface Item {
+  slug: string; title: string; category: string; situation: string; latestApprovedVersion: number | null;
+  latestVersion: number; latestStatus: string; validity: string; updatedAt: string;
+}
+type SortKey = 'title' | 'category' | 'updated' | 'slug';
+
+const CATEGORIES = ['external-flow', 'internal-flow', 'free-convection', 'friction', 'boundary-layer', 'properties'];
+const PAGE_SIZE = 25;
+
+export function LibraryTable() {
+  const [q, setQ] = useState('');
+  const [debounced, setDebounced] = useState('');
+  const [category, setCategory] = useState('');
+  const [status, setStatus] = useState('');
+  const [sort, setSort] = useState<SortKey>('title');
+  const [dir, setDir] = useState<'asc' | 'desc'>('asc');
+  const [page, setPage] = useState(1);
+  useEffect(() => { const t = setTimeout(() => { setDebounced(q.trim()); setPage(1); }, 250); return () => clearTimeout(t); }, [q]);
+
+  const params = new URLSearchParams({ page: String(page), pageSize: String(PAGE_SIZE), sort, dir });
+  if (debounced) params.set('q', debounced);
+  if (category) params.set('category', category);
+  if (status) params.set('status', status);
+  const list = useQuery({ queryKey: ['library', params.toString()], queryFn: () => api<{ items: Item[]; total: number }>(`/api/correlations?${params}`), placeholderData: keepPreviousData });
+
+  const header = (key: SortKey, label: string) => (
+    <th aria-sort={sort === key ? (dir === 'asc' ? 'ascending' : 'descending') : 'none'}>
+      <button type="button" className="uppercase tracking-wide hover:text-ink" onClick={() => { if (sort === key) setDir(dir === 'asc' ? 'desc' : 'asc'); else { setSort(key); setDir('asc'); } setPage(1); }}>
+        {label}{sort === key ? (dir === 'asc' ? ' ▲' : ' ▼') : ''}
+      </button>
+    </th>
+  );
+  const pages = list.data ? Math.max(1, Math.ceil(list.data.total / PAGE_SIZE)) : 1;
+
+  return (
+    <section className="panel space-y-3">
+      <div className="flex flex-wrap items-end gap-3">
+        <label className="flex-1 text-sm">
+          <span className="mb-1 block font-medium">Search</span>
+          <input type="search" className="field-input" placeholder="title, slug, situation or tag — e.g. cylinder, colebrook" value={q} onChange={(e) => setQ(e.target.value)} />
+        </label>
+        <label className="text-sm">
+          <span className="mb-1 block font-medium">Category</span>
+          <select className="field-input" value={category} onChange={(e) => { setCategory(e.target.value); setPage(1); }}>
+            <option value="">all</option>
+            {CATEGORIES.map((c) => <option key={c} value={c}>{c}</option>)}
+          </select>
+        </label>
+        <label className="text-sm">
+          <span className="mb-1 block font-medium">Has a version that is</span>
+          <select className="field-input" value={status} onChange={(e) => { setStatus(e.target.value); setPage(1); }}>
+            <option value="">any status</option>
+            {['approved', 'in_review', 'draft', 'returned', 'withdrawn', 'superseded'].map((s) => <option key={s} value={s}>{s.replace('_', ' ')}</option>)}
+          </select>
+        </label>
+      </div>
+      {list.isError && <p role="alert" className="text-sm text-danger">Could not load the library: {list.error.message}</p>}
+      <div className="overflow-x-auto">
+        <table className="table-plain">
+          <thead>
+            <tr>{header('title', 'Correlation')}<th>Situation</th>{header('category', 'Category')}<th>Approved</th><th>Validity</th>{header('updated', 'Updated')}</tr>
+          </thead>
+          <tbody aria-busy={list.isFetching}>
+            {list.isPending && <tr><td colSpan={6} className="animate-pulse text-ink-faint">Loading…</td></tr>}
+            {list.data?.items.length === 0 && <tr><td colSpan={6} className="text-ink-faint">Nothing matches.</td></tr>}
+            {list.data?.items.map((c) => (
+              <tr key={c.slug} className="hover:bg-paper-sunk/60">
+                <td>
+                  <Link href={`/correlations/${c.slug}`} className="font-medium text-brand-dark hover:underline">{c.title}</Link>
+                  <div className="font-mono text-xs text-ink-faint">{c.slug}</div>
+                </td>
+                <td>{c.situation}</td>
+                <td>{c.category}</td>
+                <td>{c.latestApprovedVersion ? <span className="font-mono">v{c.latestApprovedVersion}</span> : <span className="text-ink-faint">none</span>}
+                  {c.latestStatus !== 'approved' && <div className="mt-0.5"><StatusBadge status={c.latestStatus} /> <span className="text-xs text-ink-faint">v{c.latestVersion}</span></div>}</td>
+                <td className="max-w-xs font-mono text-xs text-ink-soft">{c.validity || '—'}</td>
+                <td className="whitespace-nowrap text-xs text-ink-soft">{new Date(c.updatedAt).toISOString().slice(0, 10)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      <nav aria-label="Pages" className="flex items-center justify-between text-sm">
+        <span className="text-ink-soft">{list.data ? `${list.data.total} correlation${list.data.total === 1 ? '' : 's'}` : ''}</span>
+        <span className="flex items-center gap-2">
+          <button type="button" className="btn-quiet" disabled={page <= 1} onClick={() => setPage(page - 1)}>Previous</button>
+          <span>Page {page} of {pages}</span>
+          <button type="button" className="btn-quiet" disabled={page >= pages} onClick={() => setPage(page + 1)}>Next</button>
+        </span>
+      </nav>
+    </section>
+  );
+}

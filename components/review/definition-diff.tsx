@@ -1,0 +1,41 @@
+'use client';
+
+import { diffLines } from 'diff';
+
+interface Row { left: string | null; right: string | null; kind: 'same' | 'changed' | 'removed' | 'added' }
+
+/** Side-by-side line diff of two JSON documents (previous approved on the left, this version on the right). */
+export function DefinitionDiff({ before, after, leftLabel, rightLabel }: { before: unknown; after: unknown; leftLabel: string; rightLabel: string }) {
+  const a = JSON.stringify(before, null, 2);
+  const b = JSON.stringify(after, null, 2);
+  const parts = diffLines(a, b);
+  const rows: Row[] = [];
+  for (let i = 0; i < parts.length; i++) {
+    const p = parts[i];
+    const lines = p.value.replace(/\n$/, '').split('\n');
+    if (!p.added && !p.removed) { for (const l of lines) rows.push({ left: l, right: l, kind: 'same' }); continue; }
+    if (p.removed && parts[i + 1]?.added) {
+      const added = parts[i + 1].value.replace(/\n$/, '').split('\n');
+      for (let k = 0; k < Math.max(lines.length, added.length); k++) rows.push({ left: lines[k] ?? null, right: added[k] ?? null, kind: 'changed' });
+      i++;
+      continue;
+    }
+    for (const l of lines) rows.push(p.removed ? { left: l, right: null, kind: 'removed' } : { left: null, right: l, kind: 'added' });
+  }
+  const changed = rows.filter((r) => r.kind !== 'same').length;
+  const cell = (text: string | null, side: 'l' | 'r', kind: Row['kind']) => {
+    const bg = kind === 'same' ? '' : side === 'l' ? (text === null ? 'bg-paper-sunk' : 'bg-danger-bg') : (text === null ? 'bg-paper-sunk' : 'bg-ok-bg');
+    return <td className={`whitespace-pre-wrap break-all border-l border-line px-2 font-mono text-[11px] leading-5 ${bg}`}>{text ?? ''}</td>;
+  };
+  return (
+    <div>
+      <p className="mb-1 text-xs text-ink-soft">{changed === 0 ? 'No differences.' : `${changed} line${changed === 1 ? '' : 's'} differ.`}</p>
+      <div className="max-h-[520px] overflow-auto rounded border border-line">
+        <table className="w-full table-fixed border-collapse" aria-label="Definition differences">
+          <thead className="sticky top-0 bg-paper-sunk text-left text-xs"><tr><th className="px-2 py-1">{leftLabel}</th><th className="px-2 py-1">{rightLabel}</th></tr></thead>
+          <tbody>{rows.map((r, k) => <tr key={k}>{cell(r.left, 'l', r.kind)}{cell(r.right, 'r', r.kind)}</tr>)}</tbody>
+        </table>
+      </div>
+    </div>
+  );
+}
