@@ -38,7 +38,7 @@ export function CheckCaseTable({ definition, cases, onChange, report }: { defini
           <input type="file" accept=".csv,text/csv" className="sr-only" aria-label="CSV file of check cases" onChange={(e) => { void onFile(e.target.files?.[0]); e.target.value = ''; }} />
         </label>
         {preview && (
-          <div className="space-y-2 rounded border border-line p-3" aria-label="CSV preview">
+          <section className="space-y-2 rounded border border-line p-3" aria-label="CSV preview">
             <p className="text-sm font-medium">Preview of {preview.name}: {good.length} valid row{good.length === 1 ? '' : 's'}, {bad.length} with errors</p>
             {preview.fileErrors.map((e, k) => <p key={k} role="alert" className="text-sm text-danger">{e}</p>)}
             {preview.rows.length > 0 && (
@@ -58,7 +58,7 @@ export function CheckCaseTable({ definition, cases, onChange, report }: { defini
               <button type="button" className="btn-quiet" onClick={() => setPreview(null)}>Discard</button>
             </div>
             {bad.length > 0 && <p className="text-xs text-ink-soft">Fix the rows with errors in the file and upload it again; nothing has been changed.</p>}
-          </div>
+          </section>
         )}
       </section>
       <section className="panel" aria-label="Check cases">

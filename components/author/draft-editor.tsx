@@ -108,7 +108,7 @@ function Editor({ detail }: { detail: VersionDetail }) {
       )}
       {tab === 'form' && (parsed ? <DefinitionForm definition={parsed} onChange={(d) => { setText(JSON.stringify(d, null, 2)); setDirty(true); }} /> : <p className="text-sm text-danger">Fix the JSON first: {jsonError}</p>)}
       {tab === 'cases' && (parsed ? <CheckCaseTable definition={parsed} cases={cases} onChange={(c) => { setCases(c); setDirty(true); }} report={report} /> : <p className="text-sm text-danger">Fix the JSON first: {jsonError}</p>)}
-      <ValidationReportView report={report} checkCases={cases} title="Live validation report" />
+      <ValidationReportView report={report} checkCases={cases} title="Live validation report" emptyText={`Press “Save and validate” to run schema, expression, dimension and check-case checks on this draft (${cases.length} check case${cases.length === 1 ? '' : 's'}).`} />
     </div>
   );
 }

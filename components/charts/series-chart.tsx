@@ -40,7 +40,7 @@ export function SeriesChart({ series, points, limits = [], bands = [], xLabel, y
           <Tooltip formatter={(v) => formatNumber(Number(v), 5)} labelFormatter={(v) => `${xLabel} = ${formatNumber(Number(v), 5)}`} />
           <Legend verticalAlign="top" height={28} />
           {bands.map((b, k) => <ReferenceArea key={`band-${k}`} x1={b.from} x2={b.to} fill={COLORS[(b.color ?? k) % COLORS.length]} fillOpacity={0.08} label={{ value: b.label, position: 'insideTop', fontSize: 10, fill: '#4a5866' }} />)}
-          {limits.map((l, k) => <ReferenceLine key={`lim-${k}`} x={l.x} stroke="#9a5b00" strokeDasharray="5 3" label={{ value: l.label, position: 'top', fontSize: 11, fill: '#9a5b00' }} />)}
+          {limits.map((l, k) => <ReferenceLine key={`lim-${k}`} x={l.x} stroke="#9a5b00" strokeDasharray="5 3" label={{ value: l.label, position: 'insideTopRight', fontSize: 11, fill: '#9a5b00' }} />)}
           {series.map((s, k) => <Line key={s.label} data={s.points} dataKey="y" name={s.label} stroke={COLORS[k % COLORS.length]} dot={false} strokeWidth={2} isAnimationActive={false} connectNulls={false} />)}
           {points && points.length > 0 && <Scatter data={points} dataKey="y" name="check cases" fill="#b0562f" shape="diamond" isAnimationActive={false} />}
         </ComposedChart>

@@ -5,14 +5,14 @@ import type { ValidationReport } from '@/lib/engine/validate';
 import { formatNumber } from '@/lib/client/units';
 
 /** The validation report: stages, then every check case with computed, expected and error. */
-export function ValidationReportView({ report, checkCases, title = 'Validation report and check cases' }: { report: ValidationReport | null; checkCases: CheckCase[]; title?: string }) {
+export function ValidationReportView({ report, checkCases, title = 'Validation report and check cases', emptyText }: { report: ValidationReport | null; checkCases: CheckCase[]; title?: string; emptyText?: string }) {
   return (
     <section className="panel space-y-3" aria-label="Validation report">
       <div className="flex flex-wrap items-center gap-3">
         <h2 className="mr-auto font-semibold">{title}</h2>
         {report && <span className={`rounded px-2 py-0.5 text-sm font-medium ${report.passed ? 'bg-ok-bg text-ok' : 'bg-danger-bg text-danger'}`}>{report.passed ? 'passed' : 'failed'} · {report.summary.passed}/{report.summary.checkCases} check cases · engine {report.engineVersion}</span>}
       </div>
-      {!report && <p className="text-sm text-ink-faint">Not validated yet: validation runs when the version is submitted ({checkCases.length} check case{checkCases.length === 1 ? '' : 's'} stored).</p>}
+      {!report && <p className="text-sm text-ink-faint">{emptyText ?? `Not validated yet: validation runs when the version is submitted (${checkCases.length} check case${checkCases.length === 1 ? '' : 's'} stored).`}</p>}
       {report && (
         <>
           <ol className="flex flex-wrap gap-2 text-xs">

@@ -33,7 +33,7 @@ export default function JsonEditor({ path, defaultValue, onChange, schema, heigh
   return (
     <div className="overflow-hidden rounded border border-line" data-testid="json-editor">
       <Editor height={height} language="json" path={path} defaultValue={defaultValue} onChange={(v) => onChange(v ?? '')}
-        options={{ minimap: { enabled: false }, fontSize: 13, tabSize: 2, scrollBeyondLastLine: false, wordWrap: 'on', automaticLayout: true, fixedOverflowWidgets: true }} />
+        options={{ minimap: { enabled: false }, fontSize: 13, tabSize: 2, scrollBeyondLastLine: false, wordWrap: 'on', automaticLayout: true, fixedOverflowWidgets: true, unicodeHighlight: { ambiguousCharacters: false } }} />
     </div>
   );
 }

@@ -23,6 +23,17 @@ export function DefinitionDiff({ before, after, leftLabel, rightLabel }: { befor
     for (const l of lines) rows.push(p.removed ? { left: l, right: null, kind: 'removed' } : { left: null, right: l, kind: 'added' });
   }
   const changed = rows.filter((r) => r.kind !== 'same').length;
+  // Long unchanged runs fold to three lines of context on each side.
+  const CONTEXT = 3;
+  const near = rows.map((_, k) => rows.slice(Math.max(0, k - CONTEXT), k + CONTEXT + 1).some((r) => r.kind !== 'same'));
+  const shown: (Row | { fold: number })[] = [];
+  for (let k = 0; k < rows.length; k++) {
+    if (near[k] || changed === 0) { shown.push(rows[k]); continue; }
+    let n = 0;
+    while (k + n < rows.length && !near[k + n]) n++;
+    shown.push({ fold: n });
+    k += n - 1;
+  }
   const cell = (text: string | null, side: 'l' | 'r', kind: Row['kind']) => {
     const bg = kind === 'same' ? '' : side === 'l' ? (text === null ? 'bg-paper-sunk' : 'bg-danger-bg') : (text === null ? 'bg-paper-sunk' : 'bg-ok-bg');
     return <td className={`whitespace-pre-wrap break-all border-l border-line px-2 font-mono text-[11px] leading-5 ${bg}`}>{text ?? ''}</td>;
@@ -33,7 +44,9 @@ export function DefinitionDiff({ before, after, leftLabel, rightLabel }: { befor
       <div className="max-h-[520px] overflow-auto rounded border border-line">
         <table className="w-full table-fixed border-collapse" aria-label="Definition differences">
           <thead className="sticky top-0 bg-paper-sunk text-left text-xs"><tr><th className="px-2 py-1">{leftLabel}</th><th className="px-2 py-1">{rightLabel}</th></tr></thead>
-          <tbody>{rows.map((r, k) => <tr key={k}>{cell(r.left, 'l', r.kind)}{cell(r.right, 'r', r.kind)}</tr>)}</tbody>
+          <tbody>{shown.map((r, k) => ('fold' in r
+            ? <tr key={k}><td colSpan={2} className="bg-paper-sunk px-2 text-center text-[11px] text-ink-faint">… {r.fold} unchanged line{r.fold === 1 ? '' : 's'} …</td></tr>
+            : <tr key={k}>{cell(r.left, 'l', r.kind)}{cell(r.right, 'r', r.kind)}</tr>))}</tbody>
         </table>
       </div>
     </div>

@@ -55,7 +55,7 @@ export function ReviewView({ slug, version, userId }: { slug: string; version: n
                   <SeriesChart logX={dv.comparison.scale === 'log'} xLabel={dv.comparison.sweep} yLabel={dv.comparison.output}
                     series={dv.comparison.series.map((s) => ({ label: s.label, points: s.points }))}
                     limits={[{ x: dv.comparison.largest[0].at, label: 'largest difference' }]} />
-                  <SeriesChart height={200} logX={dv.comparison.scale === 'log'} xLabel={dv.comparison.sweep} yLabel="relative difference, %"
+                  <SeriesChart height={200} logX={dv.comparison.scale === 'log'} xLabel={dv.comparison.sweep} yLabel="Δ, %"
                     series={[{ label: `(v${version} − v${dv.previous}) / v${dv.previous}, %`, points: dv.comparison.series[1].points.map((p, k) => { const b = dv.comparison!.series[0].points[k].y; return { x: p.x, y: p.y !== null && b ? ((p.y - b) / Math.abs(b)) * 100 : null }; }) }]} />
                 </>
               )}
