@@ -8,6 +8,20 @@ export interface ChartSeries {
   points: { x: number; y: number | null }[];
 }
 
+/** Powers of ten covering [lo, hi] (with 2 and 5 in between when the span is short), for log axes. */
+function decades(lo: number, hi: number): number[] {
+  const out: number[] = [];
+  const span = Math.log10(hi / lo);
+  const steps = span <= 3 ? [1, 2, 5] : [1];
+  for (let e = Math.floor(Math.log10(lo)); e <= Math.ceil(Math.log10(hi)); e++) {
+    for (const m of steps) {
+      const v = m * 10 ** e;
+      if (v >= lo * 0.999 && v <= hi * 1.001) out.push(v);
+    }
+  }
+  return out.length >= 2 ? out : [lo, hi];
+}
+
 const COLORS = ['#0f5f66', '#b0562f', '#6b4fa0', '#2d6a36', '#9a5b00', '#1d4f91', '#8a2d5c', '#4a5866'];
 
 /**
@@ -28,14 +42,17 @@ export function SeriesChart({ series, points, limits = [], bands = [], xLabel, y
   const yMin = Math.min(...ys);
   const yMax = Math.max(...ys);
   const logY = yMin > 0 && yMax / yMin >= 100;
+  const xs = series.flatMap((s) => s.points.map((p) => p.x)).concat((points ?? []).map((p) => p.x)).filter((x) => x > 0);
+  const xTicks = logX && xs.length ? decades(Math.min(...xs), Math.max(...xs)) : undefined;
+  const yTicks = logY ? decades(yMin, yMax) : undefined;
   return (
     <div style={{ width: '100%', height }}>
       <ResponsiveContainer>
         <ComposedChart margin={{ top: 10, right: 20, bottom: 24, left: 10 }}>
           <CartesianGrid stroke="#e6e0d4" />
-          <XAxis type="number" dataKey="x" scale={logX ? 'log' : 'linear'} domain={['dataMin', 'dataMax']} allowDataOverflow tickFormatter={(v) => formatNumber(v, 3)}
+          <XAxis type="number" dataKey="x" scale={logX ? 'log' : 'linear'} domain={['dataMin', 'dataMax']} ticks={xTicks} allowDataOverflow tickFormatter={(v) => formatNumber(v, 3)}
             label={{ value: xLabel, position: 'insideBottom', offset: -14, fill: '#4a5866', fontSize: 12 }} />
-          <YAxis type="number" scale={logY ? 'log' : 'linear'} domain={['auto', 'auto']} tickFormatter={(v) => formatNumber(v, 3)} width={70}
+          <YAxis type="number" scale={logY ? 'log' : 'linear'} domain={['auto', 'auto']} ticks={yTicks} tickFormatter={(v) => formatNumber(v, 3)} width={70}
             label={{ value: yLabel, angle: -90, position: 'insideLeft', fill: '#4a5866', fontSize: 12 }} />
           <Tooltip formatter={(v) => formatNumber(Number(v), 5)} labelFormatter={(v) => `${xLabel} = ${formatNumber(Number(v), 5)}`} />
           <Legend verticalAlign="top" height={28} />
