@@ -2,7 +2,7 @@ import { db, type CorrelationVersion } from '@/models';
 import { AppError } from '@/lib/http/errors';
 import { appendAuditEvent } from '@/lib/audit/log';
 import { contentHash } from '@/lib/engine/canonical';
-import type { CheckCase } from '@/lib/engine/types';
+import { checkCasesOfVersion } from './check-cases';
 
 /** Checked versions: id → when the check ran, the hash it confirmed and the exact stored definition text. */
 const verified = new Map<number, { at: number; hash: string; text: unknown }>();
@@ -29,9 +29,7 @@ export async function verifyFrozen(v: CorrelationVersion, slug: string): Promise
   const text = v.getDataValue('definition');
   const seen = verified.get(v.id);
   if (seen && seen.hash === v.contentHash && seen.text === text && Date.now() - seen.at < RECHECK_MS) return;
-  const { CheckCaseRow } = db();
-  const rows = await CheckCaseRow.findAll({ where: { versionId: v.id }, order: [['position', 'ASC']] });
-  const actual = contentHash(v.definition, rows.map((r) => r.body as CheckCase));
+  const actual = contentHash(v.definition, await checkCasesOfVersion(v.id));
   if (actual !== v.contentHash) {
     verified.delete(v.id);
     await raiseAlarm(v, slug, actual);

@@ -11,6 +11,7 @@ import { contentHash } from '@/lib/engine/canonical';
 import type { CheckCase, Definition } from '@/lib/engine/types';
 import { MEANING_OF_APPROVAL, MEANING_OF_RETURN, MEANING_OF_WITHDRAWAL } from './access';
 import { assertIntact } from './integrity';
+import { checkCasesOfVersion } from './check-cases';
 
 export const SLUG_PATTERN = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
 
@@ -32,12 +33,6 @@ async function lockedVersion(correlationId: number, slug: string, version: numbe
   const v = await CorrelationVersion.findOne({ where: { correlationId, version }, transaction, lock: transaction.LOCK.UPDATE });
   if (!v) throw new AppError('not_found:version', `Correlation "${slug}" has no version ${version}.`);
   return v;
-}
-
-async function checkCasesOf(versionId: number, transaction?: Transaction): Promise<CheckCase[]> {
-  const { CheckCaseRow } = db();
-  const rows = await CheckCaseRow.findAll({ where: { versionId }, order: [['position', 'ASC']], transaction });
-  return rows.map((r) => r.body as CheckCase);
 }
 
 async function replaceCheckCases(versionId: number, cases: CheckCase[], transaction: Transaction) {
@@ -129,7 +124,7 @@ export async function createDraftVersion({ actor, slug, fromVersion }: { actor: 
       correlationId: c.id, version: number, status: 'draft', definition: source.definition, contentHash: null, authorId: actor.id,
       submittedAt: null, approvedAt: null, approvedById: null, returnedAt: null, supersededAt: null, withdrawnAt: null, withdrawnReason: null,
     }, { transaction });
-    await replaceCheckCases(v.id, await checkCasesOf(source.id, transaction), transaction);
+    await replaceCheckCases(v.id, await checkCasesOfVersion(source.id, transaction), transaction);
     await appendAuditEvent({ transaction, event: { actorId: actor.id, action: 'version.drafted', entityType: 'version', entityId: `${slug}@${number}`, details: { from: source.version } } });
     return { slug, version: number };
   });
@@ -166,7 +161,7 @@ export async function previewValidation({ actor, slug, version }: { actor: AuthU
   const c = await Correlation.findOne({ where: { slug } });
   const v = c && await CorrelationVersion.findOne({ where: { correlationId: c.id, version } });
   if (!c || !v || (v.authorId !== actor.id && !actor.roles.includes('approver'))) throw new AppError('not_found:version', `Correlation "${slug}" has no version ${version} you can see.`);
-  return validateVersion(v.definition, await checkCasesOf(v.id));
+  return validateVersion(v.definition, await checkCasesOfVersion(v.id));
 }
 
 /**
@@ -181,7 +176,7 @@ export async function submitVersion({ actor, slug, version }: { actor: AuthUser;
     const v = await lockedVersion(c.id, slug, version, transaction);
     if (v.authorId !== actor.id) throw new AppError('forbidden:not-author', 'Only the author can submit a version.');
     if (v.status !== 'draft') throw new AppError('conflict:version-state', `Version ${version} is ${v.status.replace('_', ' ')}, not a draft; it cannot be submitted.`);
-    const checkCases = await checkCasesOf(v.id, transaction);
+    const checkCases = await checkCasesOfVersion(v.id, transaction);
     const report = validateVersion(v.definition, checkCases);
     if (!report.passed) {
       const problems = report.stages.flatMap((s) => s.issues).filter((i) => i.stage !== 'coverage');

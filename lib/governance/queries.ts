@@ -2,10 +2,13 @@ import { Op, QueryTypes, type WhereOptions } from 'sequelize';
 import { db, type CorrelationVersion, type VersionStatus } from '@/models';
 import { AppError } from '@/lib/http/errors';
 import type { AuthUser } from '@/lib/auth/users';
-import type { CheckCase, Definition } from '@/lib/engine/types';
+import type { Definition } from '@/lib/engine/types';
 import { canSeeVersion, PUBLISHED } from './access';
 import { definitionTex, validitySummary } from './serialize';
 import { verifyFrozen } from './integrity';
+import { checkCasesOfVersion } from './check-cases';
+
+export { checkCasesOfVersion };
 
 export interface ListQuery {
   q?: string;
@@ -112,10 +115,6 @@ export async function resolveVersion({ actor, slug, version }: { actor: AuthUser
   return { correlation: c, version: v };
 }
 
-export async function checkCasesOfVersion(versionId: number): Promise<CheckCase[]> {
-  const { CheckCaseRow } = db();
-  return (await CheckCaseRow.findAll({ where: { versionId }, order: [['position', 'ASC']] })).map((r) => r.body as CheckCase);
-}
 
 /** Everything a version page and the API's version answer show. Frozen versions are integrity-checked. */
 export async function getVersionDetail({ actor, slug, version }: { actor: AuthUser | null; slug: string; version: number }) {
