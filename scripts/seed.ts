@@ -3,6 +3,7 @@ import { Umzug, SequelizeStorage } from 'umzug';
 import { closeSequelize, getSequelize } from '@/lib/db/connection';
 import { seeders } from '@/seeders';
 import { closeMail, deferMailDelivery, deliverPendingMail } from '@/lib/mail/outbox';
+import { flushUsage } from '@/lib/api/usage';
 
 async function main() {
   const sequelize = getSequelize();
@@ -14,6 +15,7 @@ async function main() {
   const command = process.argv[2] ?? 'up';
   deferMailDelivery(true);
   const done = command === 'down' ? await umzug.down({ to: 0 }) : await umzug.up();
+  await flushUsage();
   for (let round = 0; round < 20; round++) {
     const { sent, failed } = await deliverPendingMail();
     if (sent === 0 || failed > 0) {

@@ -70,8 +70,8 @@ export async function up(): Promise<void> {
     const { CorrelationVersion } = db();
     const c = await Correlation.findOne({ where: { slug } });
     const v1 = await CorrelationVersion.findOne({ where: { correlationId: c!.id, version: 1 } });
-    await recordUsage({ userId: engineer.id, tokenId: null, versionId: v1!.id, evaluations: 14 });
-    await recordUsage({ userId: integrator.id, tokenId: null, versionId: v1!.id, evaluations: 220 });
+    recordUsage({ userId: engineer.id, tokenId: null, versionId: v1!.id, evaluations: 14 });
+    recordUsage({ userId: integrator.id, tokenId: null, versionId: v1!.id, evaluations: 220 });
     await withdrawVersion({ actor: approver2, slug, version: 1, reason: 'The rig flow meter was found out of calibration (reads 6 % high); K values of test series 1 are too low. Do not use for TW-7 fan selection.' });
     await createDraftVersion({ actor: author, slug, fromVersion: 1 });
     await updateDraft({ actor: author, slug, version: 2, definition: louvre(2.1), checkCases: louvreCases(2.1) });

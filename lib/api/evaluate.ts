@@ -63,13 +63,13 @@ export async function evaluateCorrelation({ actor, tokenId, slug, request }: { a
       for (let i = 0; i < m; i++) outputs[c.outputSymbols[i]] = out.outputs[r * m + i];
       return { outputs, warnings: out.warnings.get(r) ?? [] };
     });
-    await recordUsage({ userId: actor.id, tokenId, versionId: v.id, evaluations: request.rows.length });
+    recordUsage({ userId: actor.id, tokenId, versionId: v.id, evaluations: request.rows.length });
     return { ...head, ...(notices.length ? { warnings: notices } : {}), results };
   }
 
   try {
     const r = c.evaluate(request.inputs ?? {});
-    await recordUsage({ userId: actor.id, tokenId, versionId: v.id, evaluations: 1 });
+    recordUsage({ userId: actor.id, tokenId, versionId: v.id, evaluations: 1 });
     return { ...head, outputs: r.outputs, warnings: [...notices, ...r.warnings] };
   } catch (err) {
     if (err instanceof InputError) throw new AppError('invalid:inputs', `Input problem: ${err.message}`, { issues: err.issues });

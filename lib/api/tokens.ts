@@ -1,5 +1,6 @@
 import { randomBytes, createHash } from 'node:crypto';
-import { db } from '@/models';
+import { QueryTypes } from 'sequelize';
+import { db, type Role } from '@/models';
 import { AppError } from '@/lib/http/errors';
 import { appendAuditEvent } from '@/lib/audit/log';
 
@@ -49,18 +50,30 @@ export async function listApiTokens({ userId }: { userId?: number }) {
   }));
 }
 
-/** Resolves a bearer token to its row; revoked, expired or unknown tokens are refused at once. */
+/**
+ * Resolves a bearer token, with its user and roles, in one query on every request (no cache, so a
+ * revoked or expired token is refused at once).
+ */
 export async function resolveApiToken(plain: string) {
-  const { ApiToken } = db();
-  const row = await ApiToken.findOne({ where: { tokenHash: hashToken(plain) } });
+  const { sequelize, ApiToken } = db();
+  const [row] = await sequelize.query<{
+    id: number; user_id: number; scopes: string; expires_at: Date | null; revoked_at: Date | null; last_used_at: Date | null;
+    email: string; name: string; is_active: number; roles: string | null;
+  }>(`SELECT t.id, t.user_id, t.scopes, t.expires_at, t.revoked_at, t.last_used_at, u.email, u.name, u.is_active,
+        (SELECT GROUP_CONCAT(r.role ORDER BY r.role) FROM user_roles r WHERE r.user_id = u.id) AS roles
+      FROM api_tokens t JOIN users u ON u.id = t.user_id WHERE t.token_hash = ?`, { replacements: [hashToken(plain)], type: QueryTypes.SELECT });
   if (!row) throw new AppError('unauthenticated:token', 'The API token is not valid.');
-  if (row.revokedAt) throw new AppError('unauthenticated:token-revoked', 'The API token was revoked.');
-  if (row.expiresAt && row.expiresAt.getTime() <= Date.now()) {
+  if (row.revoked_at) throw new AppError('unauthenticated:token-revoked', 'The API token was revoked.');
+  if (row.expires_at && new Date(row.expires_at).getTime() <= Date.now()) {
     throw new AppError('unauthenticated:token-expired', 'The API token has expired.');
   }
-  // Last-used is advisory: update without waiting, at most once a minute per token.
-  if (!row.lastUsedAt || Date.now() - row.lastUsedAt.getTime() > 60_000) {
+  if (!row.is_active) throw new AppError('unauthenticated:token', 'The API token belongs to an inactive user.');
+  // Last-used is advisory: written without waiting, at most once a minute per token.
+  if (!row.last_used_at || Date.now() - new Date(row.last_used_at).getTime() > 60_000) {
     void ApiToken.update({ lastUsedAt: new Date() }, { where: { id: row.id } }).catch(() => undefined);
   }
-  return { id: row.id, userId: row.userId, scopes: row.scopes.split(' ') as TokenScope[] };
+  return {
+    id: row.id, scopes: row.scopes.split(' ') as TokenScope[],
+    user: { id: row.user_id, email: row.email, name: row.name, roles: (row.roles ? row.roles.split(',') : []) as Role[] },
+  };
 }

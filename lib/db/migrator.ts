@@ -17,8 +17,16 @@ export function createMigrator(sequelize: Sequelize) {
   });
 }
 
-/** Names of migrations known to the code but not yet applied to the database. */
+let currentSince = 0;
+const CURRENT_FOR_MS = 10_000;
+
+/**
+ * Names of migrations known to the code but not yet applied. Umzug's storage re-syncs its table on
+ * every call, so a "none pending" answer is remembered for CURRENT_FOR_MS (the health endpoint asks often).
+ */
 export async function pendingMigrations(sequelize: Sequelize): Promise<string[]> {
-  const pending = await createMigrator(sequelize).pending();
-  return pending.map((m) => m.name);
+  if (Date.now() - currentSince < CURRENT_FOR_MS) return [];
+  const pending = (await createMigrator(sequelize).pending()).map((m) => m.name);
+  currentSince = pending.length === 0 ? Date.now() : 0;
+  return pending;
 }

@@ -11,6 +11,7 @@ import { contentHash } from '@/lib/engine/canonical';
 import type { CheckCase, Definition } from '@/lib/engine/types';
 import { MEANING_OF_APPROVAL, MEANING_OF_RETURN, MEANING_OF_WITHDRAWAL } from './access';
 import { assertIntact } from './integrity';
+import { flushUsage } from '@/lib/api/usage';
 import { checkCasesOfVersion } from './check-cases';
 
 export const SLUG_PATTERN = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
@@ -292,6 +293,7 @@ export async function withdrawVersion({ actor, slug, version, reason }: { actor:
 
 /** Users whose evaluations (API or browser) touched a version, from the usage records. */
 export async function affectedUserIds(versionId: number, transaction?: Transaction): Promise<number[]> {
+  await flushUsage();
   const { sequelize } = db();
   const rows = await sequelize.query<{ user_id: number }>('SELECT DISTINCT user_id FROM usage_records WHERE version_id = ?', {
     replacements: [versionId], type: QueryTypes.SELECT, transaction,

@@ -103,10 +103,11 @@ export async function getCorrelation({ actor, slug }: { actor: AuthUser | null; 
 
 /** Resolves which version to use: an explicit number, or the approved one. Visibility applies. */
 export async function resolveVersion({ actor, slug, version }: { actor: AuthUser | null; slug: string; version?: number }) {
-  const { CorrelationVersion } = db();
-  const c = await findCorrelation(slug);
-  const where: WhereOptions = version !== undefined ? { correlationId: c.id, version } : { correlationId: c.id, status: 'approved' };
-  const v = await CorrelationVersion.findOne({ where });
+  const { Correlation, CorrelationVersion } = db();
+  // One query on the hot path: the version with its correlation, found by slug.
+  const where: WhereOptions = version !== undefined ? { version } : { status: 'approved' };
+  const v = await CorrelationVersion.findOne({ where, include: [{ model: Correlation, as: 'correlation', where: { slug }, required: true }] });
+  const c = v?.correlation ?? (await findCorrelation(slug));
   if (!v || !canSeeVersion(actor, v)) {
     throw version !== undefined
       ? new AppError('not_found:version', `Correlation "${slug}" has no version ${version} you can use.`)

@@ -63,9 +63,7 @@ async function identify(req: NextRequest): Promise<Caller | null> {
     const match = /^Bearer\s+(\S+)$/i.exec(header);
     if (!match) throw new AppError('unauthenticated:header', 'The Authorization header must be "Bearer <token>".');
     const token = await resolveApiToken(match[1]);
-    const user = await findUserById({ id: token.userId });
-    if (!user || !user.isActive) throw new AppError('unauthenticated:token', 'The API token belongs to an inactive user.');
-    return { user: { id: user.id, email: user.email, name: user.name, roles: user.roleNames() }, via: 'token', tokenId: token.id, scopes: token.scopes };
+    return { user: token.user, via: 'token', tokenId: token.id, scopes: token.scopes };
   }
   const session = await getServerSession(authOptions);
   if (!session?.user?.id) return null;
