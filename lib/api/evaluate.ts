@@ -1,7 +1,8 @@
 import { AppError } from '@/lib/http/errors';
 import type { AuthUser } from '@/lib/auth/users';
-import { compiled, EvaluationError, InputError, type Definition, type Warning } from '@/lib/engine';
-import { resolveVersion } from '@/lib/governance/queries';
+import { EvaluationError, InputError, type Definition, type Warning } from '@/lib/engine';
+import { compiled, compiledByKey } from '@/lib/engine/compile';
+import { loadServableVersion } from '@/lib/governance/servable';
 import { verifyFrozen } from '@/lib/governance/integrity';
 import { recordUsage } from './usage';
 
@@ -34,9 +35,12 @@ export async function evaluateCorrelation({ actor, tokenId, slug, request }: { a
   if (request.rows && request.rows.length > MAX_ROWS) {
     throw new AppError('too_large:rows', `A batch may hold at most ${MAX_ROWS} rows; this one has ${request.rows.length}. Split it into several requests.`);
   }
-  const { version: v } = await resolveVersion({ actor, slug, version: request.version });
+  const v = await loadServableVersion({ actor, slug, version: request.version });
   await verifyFrozen(v, slug);
-  const c = compiled(v.definition as Definition, v.contentHash ?? undefined);
+  // Frozen versions compile once per content hash (verifyFrozen has just matched the stored text to it);
+  // drafts (no hash) compile from their current text.
+  const parse = () => JSON.parse(v.definitionText) as Definition;
+  const c = v.contentHash ? compiledByKey(v.contentHash, parse) : compiled(parse());
   const notices = versionNotices(v);
   const head = { slug, version: v.version, contentHash: v.contentHash, status: v.status };
 

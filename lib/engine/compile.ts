@@ -286,4 +286,17 @@ export function compiled(definition: Definition, knownHash?: string): CompiledDe
   return hit;
 }
 
+/**
+ * Compiled evaluator looked up by a known key (a frozen version's content hash); the definition is
+ * produced (parsed) only on a miss, which keeps JSON parsing off the hot path.
+ */
+export function compiledByKey(key: string, load: () => Definition): CompiledDefinition {
+  const hit = cache.get(key);
+  if (hit) return hit;
+  const c = compileDefinition(load());
+  cache.set(key, c);
+  if (cache.size > CACHE_SIZE) cache.delete(cache.keys().next().value!);
+  return c;
+}
+
 export type { InputValue };

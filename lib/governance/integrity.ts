@@ -1,4 +1,4 @@
-import { db, type CorrelationVersion } from '@/models';
+import { db } from '@/models';
 import { AppError } from '@/lib/http/errors';
 import { appendAuditEvent } from '@/lib/audit/log';
 import { contentHash } from '@/lib/engine/canonical';
@@ -8,7 +8,15 @@ import { checkCasesOfVersion } from './check-cases';
 const verified = new Map<number, { at: number; hash: string; text: unknown }>();
 const RECHECK_MS = 30_000;
 
-async function raiseAlarm(v: CorrelationVersion, slug: string, actual: string) {
+/** The parts of a version the integrity check reads: stored hash and the definition as stored (text). */
+export interface FrozenContent {
+  id: number;
+  version: number;
+  contentHash: string | null;
+  definitionText: unknown;
+}
+
+async function raiseAlarm(v: FrozenContent, slug: string, actual: string) {
   const { sequelize } = db();
   await sequelize.transaction((transaction) => appendAuditEvent({ transaction, event: {
     actorId: null, action: 'integrity.hash-mismatch', entityType: 'version', entityId: `${slug}@${v.version}`,
@@ -24,12 +32,13 @@ async function raiseAlarm(v: CorrelationVersion, slug: string, actual: string) {
  * whenever the stored definition text differs from the one last verified. A mismatch raises an alarm
  * in the audit trail and refuses.
  */
-export async function verifyFrozen(v: CorrelationVersion, slug: string): Promise<void> {
+export async function verifyFrozen(v: FrozenContent, slug: string): Promise<void> {
   if (!v.contentHash) return;
-  const text = v.getDataValue('definition');
+  const text = v.definitionText;
   const seen = verified.get(v.id);
   if (seen && seen.hash === v.contentHash && seen.text === text && Date.now() - seen.at < RECHECK_MS) return;
-  const actual = contentHash(v.definition, await checkCasesOfVersion(v.id));
+  const definition = typeof text === 'string' ? JSON.parse(text) : text;
+  const actual = contentHash(definition, await checkCasesOfVersion(v.id));
   if (actual !== v.contentHash) {
     verified.delete(v.id);
     await raiseAlarm(v, slug, actual);
@@ -42,7 +51,12 @@ export async function assertIntact({ slug, version }: { slug: string; version: n
   const { Correlation, CorrelationVersion } = db();
   const c = await Correlation.findOne({ where: { slug } });
   const v = c && await CorrelationVersion.findOne({ where: { correlationId: c.id, version } });
-  if (v) await verifyFrozen(v, slug);
+  if (v) await verifyFrozen(frozenContentOf(v), slug);
+}
+
+/** Adapts a Sequelize version row to what verifyFrozen reads. */
+export function frozenContentOf(v: { id: number; version: number; contentHash: string | null; getDataValue(key: 'definition'): unknown }): FrozenContent {
+  return { id: v.id, version: v.version, contentHash: v.contentHash, definitionText: v.getDataValue('definition') };
 }
 
 /** For tests: forget what was verified so the next use re-checks at once. */

@@ -5,7 +5,7 @@ import type { AuthUser } from '@/lib/auth/users';
 import type { Definition } from '@/lib/engine/types';
 import { canSeeVersion, PUBLISHED } from './access';
 import { definitionTex, validitySummary } from './serialize';
-import { verifyFrozen } from './integrity';
+import { frozenContentOf, verifyFrozen } from './integrity';
 import { checkCasesOfVersion } from './check-cases';
 
 export { checkCasesOfVersion };
@@ -121,7 +121,7 @@ export async function resolveVersion({ actor, slug, version }: { actor: AuthUser
 export async function getVersionDetail({ actor, slug, version }: { actor: AuthUser | null; slug: string; version: number }) {
   const { SignOff, VersionComment, ValidationRun, User } = db();
   const { correlation, version: v } = await resolveVersion({ actor, slug, version });
-  await verifyFrozen(v, slug);
+  await verifyFrozen(frozenContentOf(v), slug);
   const checkCases = await checkCasesOfVersion(v.id);
   const [signOffs, comments, run] = await Promise.all([
     SignOff.findAll({ where: { versionId: v.id }, order: [['id', 'ASC']] }),

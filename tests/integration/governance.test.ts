@@ -190,6 +190,36 @@ describe('governance life cycle over HTTP against MariaDB', () => {
     expect(alarms.map((a) => a.entity_id)).toContain(`${tamper}@1`);
   });
 
+  it('refuses every life-cycle action to the roles that may not take it', async () => {
+    const target = `test-matrix-${Date.now()}`;
+    await call('/api/correlations', { cookie: author.cookie, body: { slug: target, definition: plateDefinition(), checkCases: plateCases() } });
+    const cookies: Record<string, string> = {};
+    for (const who of ['admin', 'engineer', 'integrator', 'author', 'approver']) cookies[who] = (await signIn(`${who}@demo.example`)).cookie!;
+    const actions: Record<string, { path: string; method?: string; body?: unknown; allowed: string[] }> = {
+      create: { path: '/api/correlations', body: { slug: `${target}-x`, definition: plateDefinition(), checkCases: [] }, allowed: ['author'] },
+      draft: { path: `/api/correlations/${target}/versions`, body: {}, allowed: ['author'] },
+      edit: { path: `/api/correlations/${target}/versions/1`, method: 'PATCH', body: { checkCases: plateCases() }, allowed: ['author'] },
+      submit: { path: `/api/correlations/${target}/versions/1/submit`, method: 'POST', allowed: ['author'] },
+      decide: { path: `/api/correlations/${target}/versions/1/decision`, body: { decision: 'return', comment: 'no' }, allowed: ['approver'] },
+      withdraw: { path: `/api/correlations/${target}/versions/1/withdraw`, body: { reason: 'a reason long enough' }, allowed: ['approver'] },
+      validate: { path: `/api/correlations/${target}/versions/1/validate`, method: 'POST', allowed: ['author', 'approver'] },
+    };
+    for (const [name, a] of Object.entries(actions)) {
+      for (const [who, cookie] of Object.entries(cookies)) {
+        if (a.allowed.includes(who)) continue;
+        const res = await call(a.path, { cookie, method: a.method, body: a.body });
+        expect(res.status, `${who} ${name}`).toBe(403);
+        expect(res.body.error.code, `${who} ${name}`).toBe('forbidden:role');
+      }
+    }
+    // The demo author holds the role but not this draft: the service refuses too.
+    expect((await call(actions.edit.path, { cookie: cookies.author, method: 'PATCH', body: actions.edit.body })).body.error.code).toBe('forbidden:not-author');
+    expect((await call(actions.submit.path, { cookie: cookies.author, method: 'POST' })).body.error.code).toBe('forbidden:not-author');
+    // Acting on a draft an approver may see but not decide: 409, nothing changes.
+    expect((await call(actions.decide.path, { cookie: cookies.approver, body: actions.decide.body })).status).toBe(409);
+    expect((await call(actions.withdraw.path, { cookie: cookies.approver, body: actions.withdraw.body })).status).toBe(409);
+  });
+
   it('verifies the audit chain and finds a tampered row (service and npm run audit:verify)', async () => {
     expect((await verifyAuditChain()).intact).toBe(true);
     const { sequelize } = db();
