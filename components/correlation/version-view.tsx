@@ -31,6 +31,8 @@ export function VersionView({ slug, version, user }: { slug: string; version: nu
     <QueryState query={detail}>
       {(v) => {
         const d = v.definition;
+        // Outputs that merely pass on a tabulated value are shown with their table, not as equations.
+        const tableAliases = new Set((d.steps ?? []).filter((s) => s.kind === 'table').map((s) => s.symbol));
         return (
           <div className="space-y-5">
             <header className="space-y-2">
@@ -54,8 +56,30 @@ export function VersionView({ slug, version, user }: { slug: string; version: nu
 
             <section className="panel space-y-2" aria-label="Equations">
               <h2 className="font-semibold">Equations</h2>
-              {(d.steps ?? []).map((s) => v.tex[s.symbol] && <div key={s.symbol} className="text-ink-soft"><Tex tex={v.tex[s.symbol]} display /></div>)}
-              {d.outputs.map((o) => v.tex[o.symbol] && <div key={o.symbol}><Tex tex={v.tex[o.symbol]} display /></div>)}
+              {(d.steps ?? []).filter((s) => s.kind !== 'table').map((s) => v.tex[s.symbol] && <div key={s.symbol} className="text-ink-soft"><Tex tex={v.tex[s.symbol]} display /></div>)}
+              {d.outputs.filter((o) => !tableAliases.has(o.expression.trim())).map((o) => v.tex[o.symbol] && <div key={o.symbol}><Tex tex={v.tex[o.symbol]} display /></div>)}
+              {(d.tables ?? []).map((t) => {
+                const steps = (d.steps ?? []).filter((s) => s.kind === 'table' && s.table === t.name);
+                const key = t.columns.find((c) => c.name === t.key);
+                return (
+                  <div key={t.name} className="space-y-2 text-sm">
+                    <p>
+                      {steps.map((s) => d.outputs.find((o) => o.expression.trim() === s.symbol)?.symbol ?? s.symbol).join(', ')} interpolated linearly in{' '}
+                      <code>{steps[0]?.kind === 'table' ? steps[0].at : t.key}</code> from table <strong>{t.name}</strong> ({key?.values.length ?? 0} rows, {key?.values[0]}–{key?.values[key.values.length - 1]} {key?.unit}); outside it the value is extrapolated and flagged.
+                    </p>
+                    <p className="text-xs text-ink-soft">Source: {t.source}</p>
+                    <details>
+                      <summary className="cursor-pointer text-sm font-medium">Show the tabulated values</summary>
+                      <div className="mt-2 max-h-96 overflow-auto">
+                        <table className="table-plain">
+                          <thead><tr>{t.columns.map((c) => <th key={c.name} className="normal-case">{c.name} <span className="font-normal text-ink-faint">[{c.unit}]</span></th>)}</tr></thead>
+                          <tbody>{key?.values.map((_, r) => <tr key={r}>{t.columns.map((c) => <td key={c.name} className="font-mono text-xs">{formatNumber(c.values[r], 6)}</td>)}</tr>)}</tbody>
+                        </table>
+                      </div>
+                    </details>
+                  </div>
+                );
+              })}
             </section>
 
             <div className="grid gap-5 lg:grid-cols-[1fr_380px]">
