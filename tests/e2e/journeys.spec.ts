@@ -92,6 +92,14 @@ test('an engineer evaluates with an out-of-range input and sees the warning besi
   await expect(panel.getByTestId('out-f')).not.toHaveText('—');
   await expect(page.getByRole('note').first()).toContainText('Engineering estimate');
   await page.screenshot({ path: 'test-results/journey-engineer-warning.png', fullPage: true });
+
+  // Unit picker: 15 °C converts on the server to 288.15 K; U.S. Standard Atmosphere 1976 gives μ = 1.7894e-5 Pa s at sea level.
+  await page.goto('/correlations/air-viscosity-sutherland');
+  const air = page.getByRole('complementary', { name: 'Evaluate' });
+  await air.getByLabel('T unit').selectOption('degC');
+  await air.getByLabel(/^T —/).fill('15');
+  await air.getByRole('button', { name: 'Evaluate' }).click();
+  await expect(air.getByTestId('out-mu')).toHaveText(/^1\.789\d*e-5$/);
   expect(outside).toEqual([]);
 });
 
