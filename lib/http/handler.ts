@@ -53,6 +53,10 @@ function errorResponse(err: unknown): Response {
     const body = { error: { code: err.code, message: err.message, ...(err.details !== undefined ? { details: err.details } : {}) } };
     return NextResponse.json(body, { status: status === 500 ? 400 : status, headers: err.headers });
   }
+  // A unique index caught a race the service's own check could not see (two requests at once).
+  if (err instanceof Error && err.name === 'SequelizeUniqueConstraintError') {
+    return NextResponse.json({ error: { code: 'conflict:duplicate', message: 'Someone else just created the same thing; reload and try again.' } }, { status: 409 });
+  }
   console.error('unhandled error in route handler', err);
   return NextResponse.json({ error: { code: 'internal', message: 'Something went wrong on the server; the error was logged.' } }, { status: 500 });
 }

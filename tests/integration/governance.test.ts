@@ -244,3 +244,15 @@ describe('governance life cycle over HTTP against MariaDB', () => {
     expect((await verifyAuditChain()).intact).toBe(true);
   });
 });
+
+describe('races on unique names', () => {
+  afterAll(() => closeSequelize());
+
+  it('lets one of two simultaneous creations of the same slug land; the other gets 409, not a server error', async () => {
+    const author = await freshUser(['author'], 'race');
+    const slug = `test-race-${Date.now()}`;
+    const answers = await Promise.all([0, 1, 2].map(() => call('/api/correlations', { cookie: author.cookie, body: { slug, definition: plateDefinition(), checkCases: plateCases() } })));
+    expect(answers.map((a) => a.status).sort()).toEqual([200, 409, 409]);
+    for (const a of answers.filter((x) => x.status === 409)) expect(a.body.error.code).toMatch(/^conflict:(slug|duplicate)$/);
+  });
+});
