@@ -39,12 +39,3 @@ export async function flushUsage(): Promise<void> {
     throw err;
   }
 }
-
-export async function usageOfVersion({ versionId }: { versionId: number }) {
-  await flushUsage();
-  const { sequelize } = db();
-  return sequelize.query<{ day: string; user_id: number; token_id: number; evaluations: number }>(
-    'SELECT day, user_id, token_id, evaluations FROM usage_records WHERE version_id = ? ORDER BY day DESC',
-    { replacements: [versionId], type: QueryTypes.SELECT },
-  );
-}

@@ -58,8 +58,3 @@ export async function assertIntact({ slug, version }: { slug: string; version: n
 export function frozenContentOf(v: { id: number; version: number; contentHash: string | null; getDataValue(key: 'definition'): unknown }): FrozenContent {
   return { id: v.id, version: v.version, contentHash: v.contentHash, definitionText: v.getDataValue('definition') };
 }
-
-/** For tests: forget what was verified so the next use re-checks at once. */
-export function forgetVerified() {
-  verified.clear();
-}

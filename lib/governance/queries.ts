@@ -137,18 +137,29 @@ export async function getVersionDetail({ actor, slug, version }: { actor: AuthUs
     createdAt: v.createdAt, submittedAt: v.submittedAt, approvedAt: v.approvedAt, withdrawnAt: v.withdrawnAt, withdrawnReason: v.withdrawnReason,
     definition, checkCases,
     validation: run ? (run.report as object) : null,
-    tex: safeTex(definition),
+    tex: safeTex(definition, v.contentHash),
     signOffs: signOffs.map((s) => ({ decision: s.decision, by: names.get(s.userId) ?? '?', at: s.createdAt, comment: s.comment, meaning: s.meaning, contentHash: s.contentHash })),
     comments: comments.map((c) => ({ by: names.get(c.userId) ?? '?', at: c.createdAt, body: c.body })),
   };
 }
 
-function safeTex(definition: Definition): Record<string, string> {
+const texByHash = new Map<string, Record<string, string>>();
+
+/** TeX of a definition's equations; a frozen version's is computed once per content hash. */
+function safeTex(definition: Definition, hash: string | null): Record<string, string> {
+  const cached = hash ? texByHash.get(hash) : undefined;
+  if (cached) return cached;
+  let tex: Record<string, string> = {};
   try {
-    return definitionTex(definition);
+    tex = definitionTex(definition);
   } catch {
-    return {};
+    // An invalid draft has no typeset equations; its validation report says why.
   }
+  if (hash) {
+    if (texByHash.size > 500) texByHash.clear();
+    texByHash.set(hash, tex);
+  }
+  return tex;
 }
 
 /** The previously approved (or superseded) version before `version`, for review diffs. */

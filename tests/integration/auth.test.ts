@@ -10,8 +10,8 @@ describe('authentication and role checks on the server', () => {
   beforeAll(async () => {
     engineer = (await signIn('engineer@demo.example')).cookie!;
     admin = (await signIn('admin@demo.example')).cookie!;
-    expect(engineer).toBeTruthy();
-    expect(admin).toBeTruthy();
+    expect(engineer).toMatch(/next-auth\.session-token=/);
+    expect(admin).toMatch(/next-auth\.session-token=/);
   });
 
   it('answers 401 with the error shape when there is no session or token', async () => {
