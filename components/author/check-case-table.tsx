@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { parseCheckCaseCsv, CSV_MAX_BYTES, CSV_MAX_ROWS, type CsvRow } from '@/lib/client/check-case-csv';
 import type { CheckCase, Definition } from '@/lib/engine/types';
 import type { ValidationReport } from '@/lib/engine/validate';
+import { NumberCell } from '@/components/ui/number-cell';
 
 const showInputs = (c: CheckCase) => Object.entries(c.inputs).map(([k, v]) => `${k}=${typeof v === 'number' ? v : `${v.value} ${v.unit}`}`).join(', ');
 
@@ -19,10 +20,13 @@ export function CheckCaseTable({ definition, cases, onChange, report }: { defini
   }
   const good = preview?.rows.filter((r) => r.checkCase).map((r) => r.checkCase!) ?? [];
   const bad = preview?.rows.filter((r) => !r.checkCase) ?? [];
-  const setExpected = (k: number, symbol: string, value: string) => {
-    const n = Number(value);
-    if (value.trim() === '' || !Number.isFinite(n)) return;
-    onChange(cases.map((c, j) => (j === k ? { ...c, expected: { ...c.expected, [symbol]: n } } : c)));
+  const setExpected = (k: number, symbol: string, n: number | undefined) => {
+    onChange(cases.map((c, j) => {
+      if (j !== k) return c;
+      const expected = { ...c.expected };
+      if (n === undefined) delete expected[symbol]; else expected[symbol] = n;
+      return { ...c, expected };
+    }));
   };
 
   return (
@@ -72,7 +76,7 @@ export function CheckCaseTable({ definition, cases, onChange, report }: { defini
                 <tr key={`${k}-${c.label}`} className={r && !r.passed ? 'bg-danger-bg' : ''}>
                   <td>{c.label}{c.expectWarnings?.length ? <div className="text-xs text-caution">expects warning: {c.expectWarnings.join(', ')}</div> : null}</td>
                   <td className="font-mono text-xs">{showInputs(c)}</td>
-                  {outputs.map((o) => <td key={o}><input aria-label={`${c.label} expected ${o}`} className="field-input w-28 font-mono text-xs" defaultValue={c.expected[o] ?? ''} onBlur={(e) => setExpected(k, o, e.target.value)} /></td>)}
+                  {outputs.map((o) => <td key={o}><NumberCell label={`${c.label} expected ${o}`} optional value={c.expected[o]} onCommit={(v) => setExpected(k, o, v)} /></td>)}
                   <td className="text-xs">{c.tolerance.rel !== undefined && `rel ${c.tolerance.rel}`}{c.tolerance.abs !== undefined && ` abs ${c.tolerance.abs}`}</td>
                   <td className="text-xs">{c.source.kind}</td>
                   <td className="text-xs">{r ? (r.passed ? <span className="text-ok">pass</span> : <span className="text-danger">fail</span>) : '—'}</td>

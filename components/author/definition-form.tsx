@@ -1,9 +1,9 @@
 'use client';
 
 import type { Definition, ValidityLimit, Reference } from '@/lib/engine/types';
+import { NumberCell } from '@/components/ui/number-cell';
 
 const CATEGORIES = ['external-flow', 'internal-flow', 'free-convection', 'friction', 'boundary-layer', 'properties'];
-const numOrUndef = (s: string) => (s.trim() === '' || !Number.isFinite(Number(s)) ? undefined : Number(s));
 
 /** Form view of the parts of a definition that are tedious in JSON: description, validity, references. */
 export function DefinitionForm({ definition: d, onChange }: { definition: Definition; onChange: (d: Definition) => void }) {
@@ -36,8 +36,8 @@ export function DefinitionForm({ definition: d, onChange }: { definition: Defini
               {limits.map((l, k) => (
                 <tr key={k}>
                   <td><select aria-label={`limit ${k + 1} symbol`} className="field-input" value={l.symbol} onChange={(e) => setLimit(k, { symbol: e.target.value })}>{symbols.map((s) => <option key={s}>{s}</option>)}</select></td>
-                  <td><input aria-label={`limit ${k + 1} min`} className="field-input w-24 font-mono" defaultValue={l.min ?? ''} onBlur={(e) => setLimit(k, { min: numOrUndef(e.target.value) })} /></td>
-                  <td><input aria-label={`limit ${k + 1} max`} className="field-input w-24 font-mono" defaultValue={l.max ?? ''} onBlur={(e) => setLimit(k, { max: numOrUndef(e.target.value) })} /></td>
+                  <td><NumberCell label={`limit ${k + 1} min`} className="w-24" optional value={l.min} onCommit={(v) => setLimit(k, { min: v })} /></td>
+                  <td><NumberCell label={`limit ${k + 1} max`} className="w-24" optional value={l.max} onCommit={(v) => setLimit(k, { max: v })} /></td>
                   <td><select aria-label={`limit ${k + 1} action`} className="field-input" value={l.action ?? 'warn'} onChange={(e) => setLimit(k, { action: e.target.value as 'warn' | 'refuse' })}><option value="warn">warn</option><option value="refuse">refuse</option></select></td>
                   <td><button type="button" className="btn-quiet px-2" aria-label={`remove limit ${k + 1}`} onClick={() => set({ validity: limits.filter((_, j) => j !== k) })}>✕</button></td>
                 </tr>

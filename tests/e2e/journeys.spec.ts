@@ -38,6 +38,10 @@ test('an author drafts a correlation, uploads check cases from CSV, sees one fai
   await expect(report.getByText(/computed 94\.86\d+ differs from expected 95/).first()).toBeVisible();
   await page.screenshot({ path: 'test-results/journey-author-failing-case.png', fullPage: true });
 
+  await page.getByLabel('high expected Nu_D').fill('94.8x');
+  await page.getByLabel('high expected Nu_D').blur();
+  await expect(page.getByText('Not a number (use e.g. 2.5e4)')).toBeVisible();
+  await expect(page.getByLabel('high expected Nu_D')).toHaveValue('94.8x');
   await page.getByLabel('high expected Nu_D').fill('94.86832980505137');
   await page.getByLabel('high expected Nu_D').blur();
   await page.getByRole('button', { name: 'Save and validate' }).click();
