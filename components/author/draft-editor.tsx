@@ -15,6 +15,7 @@ import type { ValidationReport } from '@/lib/engine/validate';
 import definitionSchema from '@/validation/definition.schema.json';
 import { CheckCaseTable } from './check-case-table';
 import { DefinitionForm } from './definition-form';
+import { TabList } from '@/components/ui/tab-list';
 
 const JsonEditor = dynamic(() => import('@/components/editor/json-editor'), { ssr: false, loading: () => <p className="animate-pulse p-4 text-sm text-ink-faint">Loading editor…</p> });
 
@@ -94,12 +95,10 @@ function Editor({ detail }: { detail: VersionDetail }) {
           {problems.slice(0, 30).map((p, k) => <li key={k}><code className="text-xs">{p.path}</code> {p.message}</li>)}
         </ul>
       )}
-      <div role="tablist" className="flex gap-1 border-b border-line">
-        {([['json', 'Definition (JSON)'], ['form', 'Form'], ['cases', `Check cases (${cases.length})`]] as [Tab, string][]).map(([t, label]) => (
-          <button key={t} role="tab" type="button" aria-selected={tab === t} onClick={() => { if (t === 'json') setEditorKey((k) => k + 1); setTab(t); }}
-            className={`-mb-px border-b-2 px-3 py-2 text-sm ${tab === t ? 'border-brand font-medium text-brand-dark' : 'border-transparent text-ink-soft hover:text-ink'}`}>{label}</button>
-        ))}
-      </div>
+      <TabList label="Draft parts" value={tab} className="flex gap-1 border-b border-line"
+        tabs={[['json', 'Definition (JSON)'], ['form', 'Form'], ['cases', `Check cases (${cases.length})`]]}
+        onChange={(t) => { if (t === 'json') setEditorKey((k) => k + 1); setTab(t); }}
+        tabClass={(on) => `-mb-px border-b-2 px-3 py-2 text-sm ${on ? 'border-brand font-medium text-brand-dark' : 'border-transparent text-ink-soft hover:text-ink'}`} />
       {tab === 'json' && (
         <section aria-label="Definition JSON" className="space-y-1">
           <JsonEditor key={editorKey} path={`${slug}-v${version}-definition.json`} defaultValue={text} schema={definitionSchema} onChange={(t) => { setText(t); setDirty(true); }} />

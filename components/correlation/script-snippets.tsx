@@ -3,6 +3,7 @@
 import { useState } from 'react';
 import { defaultInputs } from './default-inputs';
 import { CopyButton } from '@/components/ui/copy-button';
+import { TabList } from '@/components/ui/tab-list';
 import type { VersionDetail } from './types';
 
 /** Copy-ready calls pinned to this version: curl, Python (requests), TypeScript (fetch). */
@@ -22,12 +23,9 @@ export function ScriptSnippets({ slug, detail }: { slug: string; detail: Version
     <section className="panel space-y-2" aria-label="Use from a script">
       <div className="flex items-center gap-2">
         <h2 className="mr-auto font-semibold">Use from a script</h2>
-        <div role="tablist" className="flex gap-1">
-          {(['curl', 'python', 'typescript'] as const).map((t) => (
-            <button key={t} role="tab" aria-selected={tab === t} type="button" onClick={() => setTab(t)}
-              className={`rounded px-2 py-1 text-xs ${tab === t ? 'bg-brand text-white' : 'bg-paper-sunk text-ink-soft'}`}>{t === 'python' ? 'Python' : t === 'typescript' ? 'TypeScript' : 'curl'}</button>
-          ))}
-        </div>
+        <TabList label="Language" value={tab} onChange={setTab} className="flex gap-1"
+          tabs={[['curl', 'curl'], ['python', 'Python'], ['typescript', 'TypeScript']]}
+          tabClass={(on) => `rounded px-2 py-1 text-xs ${on ? 'bg-brand text-white' : 'bg-paper-sunk text-ink-soft'}`} />
         <CopyButton text={snippets[tab]} />
       </div>
       <pre className="overflow-x-auto rounded bg-ink p-3 text-xs leading-relaxed text-paper"><code>{snippets[tab]}</code></pre>

@@ -96,6 +96,11 @@ test('an engineer evaluates with an out-of-range input and sees the warning besi
   await expect(panel.getByTestId('out-f')).not.toHaveText('—');
   await expect(page.getByRole('note').first()).toContainText('Engineering estimate');
   await page.screenshot({ path: 'test-results/journey-engineer-warning.png', fullPage: true });
+  // Keyboard: the snippet tabs follow the arrow keys.
+  await page.getByRole('tab', { name: 'curl' }).focus();
+  await page.keyboard.press('ArrowRight');
+  await expect(page.getByRole('tab', { name: 'Python' })).toHaveAttribute('aria-selected', 'true');
+  await expect(page.getByRole('region', { name: 'Use from a script' })).toContainText('import os, requests');
 
   // Unit picker: 15 °C converts on the server to 288.15 K; U.S. Standard Atmosphere 1976 gives μ = 1.7894e-5 Pa s at sea level.
   await page.goto('/correlations/air-viscosity-sutherland');
