@@ -1,4 +1,5 @@
 import { db, type Role } from '@/models';
+import { findUserById, toAuthUser, type AuthUser } from '@/lib/auth/users';
 import { hashPassword } from '@/lib/auth/passwords';
 import { appendAuditEvent } from '@/lib/audit/log';
 
@@ -16,6 +17,15 @@ export const DEMO_USERS: { email: string; name: string; roles: Role[] }[] = [
 ];
 
 export const name = '20261201000100-demo-users';
+
+/** A demo user as the services expect an actor; later seeders act through them. */
+export async function demoActor(email: string): Promise<AuthUser> {
+  const { User } = db();
+  const u = await User.findOne({ where: { email } });
+  const full = u && (await findUserById({ id: u.id }));
+  if (!full) throw new Error(`seed needs the demo user ${email}`);
+  return toAuthUser(full);
+}
 
 export async function up(): Promise<void> {
   const { sequelize, User, UserRole } = db();

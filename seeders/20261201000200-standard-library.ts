@@ -1,19 +1,10 @@
 import { db } from '@/models';
-import { findUserById, toAuthUser } from '@/lib/auth/users';
 import { readLibrary } from '@/lib/governance/library';
 import { createCorrelation, decideVersion, submitVersion } from '@/lib/governance/lifecycle';
 import { AppError } from '@/lib/http/errors';
-import { DEMO_PASSWORD } from './20261201000100-demo-users';
+import { DEMO_PASSWORD, demoActor } from './20261201000100-demo-users';
 
 export const name = '20261201000200-standard-library';
-
-async function demoUser(email: string) {
-  const { User } = db();
-  const u = await User.findOne({ where: { email } });
-  const full = u && await findUserById({ id: u.id });
-  if (!full) throw new Error(`seed needs the demo user ${email}`);
-  return toAuthUser(full);
-}
 
 /**
  * Every definition file goes through the same life cycle a person would use: drafted by the demo
@@ -21,8 +12,8 @@ async function demoUser(email: string) {
  * validation fails stops the seed with the report's problems.
  */
 export async function up(): Promise<void> {
-  const author = await demoUser('author@demo.example');
-  const approver = await demoUser('approver@demo.example');
+  const author = await demoActor('author@demo.example');
+  const approver = await demoActor('approver@demo.example');
   const { Correlation } = db();
   for (const entry of readLibrary()) {
     if (await Correlation.findOne({ where: { slug: entry.slug } })) continue;

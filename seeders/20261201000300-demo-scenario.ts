@@ -1,8 +1,7 @@
 import { db } from '@/models';
-import { findUserById, toAuthUser } from '@/lib/auth/users';
 import { addComment, createCorrelation, createDraftVersion, decideVersion, submitVersion, updateDraft, withdrawVersion } from '@/lib/governance/lifecycle';
 import { recordUsage } from '@/lib/api/usage';
-import { DEMO_PASSWORD } from './20261201000100-demo-users';
+import { DEMO_PASSWORD, demoActor } from './20261201000100-demo-users';
 
 export const name = '20261201000300-demo-scenario';
 
@@ -53,13 +52,12 @@ const finArray = {
 };
 
 export async function up(): Promise<void> {
-  const { User, Correlation } = db();
-  const get = async (email: string) => toAuthUser((await findUserById({ id: (await User.findOne({ where: { email } }))!.id }))!);
-  const author = await get('author@demo.example');
-  const approver = await get('approver@demo.example');
-  const approver2 = await get('approver2@demo.example');
-  const engineer = await get('engineer@demo.example');
-  const integrator = await get('integrator@demo.example');
+  const { Correlation } = db();
+  const author = await demoActor('author@demo.example');
+  const approver = await demoActor('approver@demo.example');
+  const approver2 = await demoActor('approver2@demo.example');
+  const engineer = await demoActor('engineer@demo.example');
+  const integrator = await demoActor('integrator@demo.example');
 
   if (!(await Correlation.findOne({ where: { slug: 'brightwater-louvre-pressure-loss' } }))) {
     const slug = 'brightwater-louvre-pressure-loss';
@@ -86,10 +84,10 @@ export async function up(): Promise<void> {
     });
   }
 
-  if (!(await db().CorrelationVersion.findOne({ where: { correlationId: (await Correlation.findOne({ where: { slug: 'cylinder-crossflow-hilpert' } }))?.id ?? 0, version: 2 } }))) {
-    if (await Correlation.findOne({ where: { slug: 'cylinder-crossflow-hilpert' } })) {
-      await createDraftVersion({ actor: author, slug: 'cylinder-crossflow-hilpert' });
-    }
+  // The methods engineer has started a revision of Hilpert's table (still a draft).
+  const hilpert = await Correlation.findOne({ where: { slug: 'cylinder-crossflow-hilpert' } });
+  if (hilpert && !(await db().CorrelationVersion.findOne({ where: { correlationId: hilpert.id, version: 2 } }))) {
+    await createDraftVersion({ actor: author, slug: 'cylinder-crossflow-hilpert' });
   }
 }
 

@@ -3,6 +3,7 @@ import { QueryTypes } from 'sequelize';
 import { db, type Role } from '@/models';
 import { AppError } from '@/lib/http/errors';
 import { appendAuditEvent } from '@/lib/audit/log';
+import { userLabels } from '@/lib/auth/labels';
 
 export const TOKEN_SCOPES = ['read', 'evaluate'] as const;
 export type TokenScope = (typeof TOKEN_SCOPES)[number];
@@ -40,9 +41,9 @@ export async function revokeApiToken({ actorId, tokenId, isAdmin }: { actorId: n
 }
 
 export async function listApiTokens({ userId }: { userId?: number }) {
-  const { ApiToken, User } = db();
+  const { ApiToken } = db();
   const rows = await ApiToken.findAll({ where: userId ? { userId } : {}, order: [['id', 'DESC']] });
-  const users = new Map((await User.findAll({ attributes: ['id', 'email'] })).map((u) => [u.id, u.email]));
+  const users = await userLabels({ ids: rows.map((t) => t.userId), field: 'email' });
   return rows.map((t) => ({
     id: t.id, name: t.name, prefix: t.prefix, scopes: t.scopes.split(' '), userId: t.userId,
     userEmail: users.get(t.userId) ?? '?', expiresAt: t.expiresAt, revokedAt: t.revokedAt,

@@ -1,5 +1,6 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { db } from '@/models';
+import { userLabels } from '@/lib/auth/labels';
 import { auditEventHash, GENESIS_HASH, type AuditEventContent } from './hash';
 
 export type AuditInput = Omit<AuditEventContent, 'at' | 'beforeHash' | 'afterHash' | 'details'> & {
@@ -75,9 +76,9 @@ export async function verifyAuditChain(): Promise<ChainStatus> {
 
 /** Newest first, with actor names. */
 export async function listAuditEvents({ page, pageSize }: { page: number; pageSize: number }) {
-  const { AuditEvent, User } = db();
+  const { AuditEvent } = db();
   const { rows, count } = await AuditEvent.findAndCountAll({ order: [['id', 'DESC']], limit: pageSize, offset: (page - 1) * pageSize });
-  const names = new Map((await User.findAll({ attributes: ['id', 'email'] })).map((u) => [u.id, u.email]));
+  const names = await userLabels({ ids: rows.map((e) => e.actorId), field: 'email' });
   return {
     items: rows.map((e) => ({
       id: e.id, at: e.at, actor: e.actorId ? names.get(e.actorId) ?? `user ${e.actorId}` : 'system', action: e.action,

@@ -1,5 +1,6 @@
 import { compiled, EvaluationError } from './compile';
 import type { Definition } from './types';
+import { boundsOf, isLogRange } from './ranges';
 
 export interface CompareSeries {
   label: string;
@@ -20,14 +21,9 @@ export interface Comparison {
   largest: { label: string; relDiff: number; at: number }[];
 }
 
-function rangeOf(def: Definition, symbol: string): { min?: number; max?: number } {
-  const lims = (def.validity ?? []).filter((l) => l.symbol === symbol);
-  return { min: lims.find((l) => l.min !== undefined)?.min, max: lims.find((l) => l.max !== undefined)?.max };
-}
-
 /** Log spacing for inputs spanning two decades or more (Re, Ra…), linear otherwise. */
 export function grid(from: number, to: number, points: number): { xs: number[]; scale: 'log' | 'linear' } {
-  const log = from > 0 && to / from >= 100;
+  const log = isLogRange(from, to);
   const xs = Array.from({ length: points }, (_, i) => {
     const t = points === 1 ? 0 : i / (points - 1);
     return log ? Math.exp(Math.log(from) + t * (Math.log(to) - Math.log(from))) : from + t * (to - from);
@@ -53,7 +49,7 @@ export function compareDefinitions({ items, sweep, output, fixed, from, to, poin
     if (!it.definition.inputs.some((i) => i.symbol === sweep)) throw new Error(`${it.label} has no input "${sweep}"`);
     if (!it.definition.outputs.some((o) => o.symbol === output)) throw new Error(`${it.label} has no output "${output}"`);
   }
-  const ranges = items.map((it) => rangeOf(it.definition, sweep));
+  const ranges = items.map((it) => boundsOf(it.definition, sweep));
   const lo = from ?? Math.max(...ranges.map((r) => r.min ?? -Infinity));
   const hi = to ?? Math.min(...ranges.map((r) => r.max ?? Infinity));
   if (!Number.isFinite(lo) || !Number.isFinite(hi) || !(lo < hi)) {

@@ -1,17 +1,7 @@
 import type { Unit } from 'mathjs';
 import type { Analysed, DefinitionIssue } from './analyse';
+import { typicalValue } from './ranges';
 import { describeDimension, hasDimensionOf, isDimensionless, parseUnit, quantity } from './units';
-
-/** A representative magnitude for a symbol: the middle of its validity range (geometric when wide), else 1. */
-function representative(a: Analysed, symbol: string): number {
-  const lims = (a.definition.validity ?? []).filter((l) => l.symbol === symbol);
-  const min = lims.find((l) => l.min !== undefined)?.min;
-  const max = lims.find((l) => l.max !== undefined)?.max;
-  if (min !== undefined && max !== undefined) return min > 0 && max / min > 100 ? Math.sqrt(min * max) : (min + max) / 2;
-  if (min !== undefined) return min > 0 ? min * 2 : min + 1;
-  if (max !== undefined) return max > 0 ? max / 2 : max - 1;
-  return 1;
-}
 
 /**
  * Evaluates every step and output with units (mathjs quantities) and reports each expression whose
@@ -21,7 +11,7 @@ export function checkDimensions(a: Analysed): DefinitionIssue[] {
   const issues: DefinitionIssue[] = [];
   const scope = new Map<string, unknown>();
   const bad = new Set<string>();
-  for (const inp of a.definition.inputs) scope.set(inp.symbol, quantity(representative(a, inp.symbol), inp.unit));
+  for (const inp of a.definition.inputs) scope.set(inp.symbol, quantity(typicalValue(a.definition, inp.symbol), inp.unit));
   for (const c of a.definition.constants ?? []) scope.set(c.symbol, quantity(c.value === 0 ? 1 : c.value, c.unit));
 
   const evaluateWithUnits = (node: { compile(): { evaluate(scope: Map<string, unknown>): unknown } }) => node.compile().evaluate(scope);

@@ -3,6 +3,7 @@ import { analyseDefinition, type DefinitionIssue, type Stage } from './analyse';
 import { checkDimensions } from './dimensions';
 import { compiled, EvaluationError, InputError, type CompiledDefinition } from './compile';
 import type { CheckCase, Definition, Warning } from './types';
+import { isLogRange } from './ranges';
 
 export const ENGINE_VERSION = '1.0.0';
 export const REPORT_FORMAT = 1;
@@ -90,31 +91,29 @@ function runCase(c: CompiledDefinition, cc: CheckCase, index: number): CaseResul
 
 function coverageOf(c: CompiledDefinition, cases: CheckCase[], results: CaseResult[]): ValidationReport['coverage'] {
   const entries: CoverageEntry[] = [];
-  const inRange = cases.filter((_, i) => results[i].warnings.length === 0 && !cases[i].expectRefusal);
-  for (const inp of c.definition.inputs) {
-    const lims = c.limits.filter((l) => l.symbol === inp.symbol && !l.note?.startsWith('table:'));
-    const min = lims.find((l) => l.min !== undefined)?.min ?? c.limits.find((l) => l.symbol === inp.symbol && l.min !== undefined)?.min;
-    const max = lims.find((l) => l.max !== undefined)?.max ?? c.limits.find((l) => l.symbol === inp.symbol && l.max !== undefined)?.max;
-    if (min === undefined || max === undefined) continue;
-    const log = min > 0 && max / min >= 100;
+  const inRange = new Set(cases.filter((_, i) => results[i].warnings.length === 0 && !cases[i].expectRefusal));
+  // Each case's inputs in declared units, read once (null when they cannot be read).
+  const values = cases.map((cc) => { try { return c.readInputs(cc.inputs, 'inputs'); } catch { return null; } });
+  c.definition.inputs.forEach((inp, k) => {
+    // Published limits first; a table's range stands in where the definition declares none.
+    const own = c.limits.filter((l) => l.symbol === inp.symbol && !l.note?.startsWith('table:'));
+    const any = c.limits.filter((l) => l.symbol === inp.symbol);
+    const min = own.find((l) => l.min !== undefined)?.min ?? any.find((l) => l.min !== undefined)?.min;
+    const max = own.find((l) => l.max !== undefined)?.max ?? any.find((l) => l.max !== undefined)?.max;
+    if (min === undefined || max === undefined) return;
+    const log = isLogRange(min, max);
     const pos = (x: number) => (log ? (Math.log(x) - Math.log(min)) / (Math.log(max) - Math.log(min)) : (x - min) / (max - min));
     const touched: [boolean, boolean, boolean] = [false, false, false];
     let outside = 0;
-    for (const cc of cases) {
+    cases.forEach((cc, i) => {
       const raw = cc.inputs[inp.symbol];
-      let x: number;
-      try {
-        x = c.readInputs(cc.inputs, 'inputs')[c.inputSymbols.indexOf(inp.symbol)];
-      } catch {
-        x = typeof raw === 'number' ? raw : NaN;
-      }
-      if (!(x >= min && x <= max)) { outside++; continue; }
-      if (!inRange.includes(cc)) continue;
-      touched[Math.min(2, Math.floor(pos(x) * 3))] = true;
-    }
+      const x = values[i]?.[k] ?? (typeof raw === 'number' ? raw : NaN);
+      if (!(x >= min && x <= max)) { outside++; return; }
+      if (inRange.has(cc)) touched[Math.min(2, Math.floor(pos(x) * 3))] = true;
+    });
     entries.push({ symbol: inp.symbol, min, max, scale: log ? 'log' : 'linear', touched, outside });
-  }
-  const oneCorner = entries.length > 0 && inRange.length > 0 && entries.every((e) => e.touched.filter(Boolean).length <= 1);
+  });
+  const oneCorner = entries.length > 0 && inRange.size > 0 && entries.every((e) => e.touched.filter(Boolean).length <= 1);
   const message = entries.length === 0
     ? 'no input has both a minimum and a maximum, so range coverage cannot be judged'
     : oneCorner

@@ -2,6 +2,7 @@ import { Op, QueryTypes, type WhereOptions } from 'sequelize';
 import { db, type CorrelationVersion, type VersionStatus } from '@/models';
 import { AppError } from '@/lib/http/errors';
 import type { AuthUser } from '@/lib/auth/users';
+import { userLabels } from '@/lib/auth/labels';
 import type { Definition } from '@/lib/engine/types';
 import { canSeeVersion, PUBLISHED } from './access';
 import { definitionTex, validitySummary } from './serialize';
@@ -84,11 +85,11 @@ export async function findCorrelation(slug: string) {
 
 /** A correlation with the versions the caller may see. */
 export async function getCorrelation({ actor, slug }: { actor: AuthUser | null; slug: string }) {
-  const { CorrelationVersion, User } = db();
+  const { CorrelationVersion } = db();
   const c = await findCorrelation(slug);
   const versions = (await CorrelationVersion.findAll({ where: { correlationId: c.id }, order: [['version', 'DESC']] })).filter((v) => canSeeVersion(actor, v));
   if (versions.length === 0) throw new AppError('not_found:correlation', `No correlation "${slug}".`);
-  const users = new Map((await User.findAll({ where: { id: [...new Set(versions.map((v) => v.authorId))] }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
+  const users = await userLabels({ ids: versions.map((v) => v.authorId) });
   const approved = versions.find((v) => v.status === 'approved');
   return {
     slug: c.slug, title: c.title, category: c.category, situation: c.situation, tags: c.tags,
@@ -119,7 +120,7 @@ export async function resolveVersion({ actor, slug, version }: { actor: AuthUser
 
 /** Everything a version page and the API's version answer show. Frozen versions are integrity-checked. */
 export async function getVersionDetail({ actor, slug, version }: { actor: AuthUser | null; slug: string; version: number }) {
-  const { SignOff, VersionComment, ValidationRun, User } = db();
+  const { SignOff, VersionComment, ValidationRun } = db();
   const { correlation, version: v } = await resolveVersion({ actor, slug, version });
   await verifyFrozen(frozenContentOf(v), slug);
   const checkCases = await checkCasesOfVersion(v.id);
@@ -129,7 +130,7 @@ export async function getVersionDetail({ actor, slug, version }: { actor: AuthUs
     ValidationRun.findOne({ where: { versionId: v.id }, order: [['id', 'DESC']] }),
   ]);
   const ids = [...new Set([v.authorId, ...signOffs.map((s) => s.userId), ...comments.map((c) => c.userId)])];
-  const names = new Map((await User.findAll({ where: { id: ids }, attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
+  const names = await userLabels({ ids });
   const definition = v.definition as Definition;
   return {
     slug, title: correlation.title, version: v.version, status: v.status, contentHash: v.contentHash,
@@ -174,9 +175,9 @@ export async function previousApproved({ slug, before }: { slug: string; before:
 
 /** Versions waiting for review, oldest first, for approvers. */
 export async function reviewQueue({ actor }: { actor: AuthUser }) {
-  const { CorrelationVersion, Correlation, User } = db();
+  const { CorrelationVersion, Correlation } = db();
   const rows = await CorrelationVersion.findAll({ where: { status: 'in_review' }, include: [{ model: Correlation, as: 'correlation' }], order: [['submittedAt', 'ASC']] });
-  const names = new Map((await User.findAll({ attributes: ['id', 'name'] })).map((u) => [u.id, u.name]));
+  const names = await userLabels({ ids: rows.map((v) => v.authorId) });
   return rows.map((v) => ({
     slug: v.correlation!.slug, title: v.correlation!.title, version: v.version, author: names.get(v.authorId) ?? '?',
     submittedAt: v.submittedAt, contentHash: v.contentHash, ownVersion: v.authorId === actor.id,
