@@ -4,7 +4,7 @@ import { convert, isDimensionless } from './units';
 import { analyseDefinition, DefinitionError, type Analysed } from './analyse';
 import { checkDefinitionSchema } from './schema';
 import { canonicalJson, sha256Hex } from './canonical';
-import type { Definition, EvaluationResult, InputValue, Warning } from './types';
+import type { Definition, EvaluationResult, InputDef, InputValue, ValidityLimit, Warning } from './types';
 
 /** A limit as the evaluator checks it; table ranges become limits too. */
 export interface CompiledLimit {
@@ -52,6 +52,14 @@ export interface CompiledDefinition {
   runMany(rows: Float64Array, count: number): { outputs: Float64Array; warnings: Map<number, Warning[]>; errors: Map<number, EvaluationError> };
   /** Evaluation from API-style inputs: numbers in declared units or { value, unit }. */
   evaluate(inputs: Record<string, unknown>): EvaluationResult;
+  /**
+   * The bare evaluator for callers that chain definitions (lib/engine/chain.ts): `v` holds nSlots
+   * numbers with the inputs (declared units, declared order) first; afterwards the outputs sit at
+   * outputSlots. `W(limitIndex, value)` is called for each limit broken; it may throw to refuse.
+   */
+  exec(v: Float64Array, W: (limitIndex: number, value: number) => void): void;
+  nSlots: number;
+  outputSlots: number[];
   /** Turns API-style inputs into numbers in declared units; `path` prefixes error paths. */
   readInputs(inputs: unknown, path: string): Float64Array;
   /** The generated JavaScript, for inspection and tests. */
@@ -98,6 +106,73 @@ export function limitMessage(lim: CompiledLimit, value: number): string {
   return `${lim.symbol} = ${fmt(value)} is ${what}${lim.note && !lim.note.startsWith('table:') ? ` — ${lim.note}` : ''}`;
 }
 
+/** A limit's warning for a value (the message names the symbol, the value and the published bound). */
+export function warningOf(lim: CompiledLimit, value: number): Warning {
+  const w: Warning = { symbol: lim.symbol, value, message: limitMessage(lim, value) };
+  if (lim.min !== undefined) w.min = lim.min;
+  if (lim.max !== undefined) w.max = lim.max;
+  return w;
+}
+
+/** True when `value` breaks the limit (NaN breaks every limit). */
+export function breaks(lim: CompiledLimit, value: number): boolean {
+  if (lim.min !== undefined && !(lim.minInclusive ? value >= lim.min : value > lim.min)) return true;
+  if (lim.max !== undefined && !(lim.maxInclusive ? value <= lim.max : value < lim.max)) return true;
+  return false;
+}
+
+export function compileLimits(validity: ValidityLimit[] | undefined): CompiledLimit[] {
+  return (validity ?? []).map((l) => ({
+    symbol: l.symbol, min: l.min, max: l.max, minInclusive: l.minInclusive ?? true, maxInclusive: l.maxInclusive ?? true,
+    action: l.action ?? 'warn', note: l.note,
+  }));
+}
+
+/**
+ * Turns API-style inputs (numbers in declared units, or { value, unit }) into numbers in the
+ * declared units, in declared order; every problem is reported with its path.
+ */
+export function readInputValues(declared: InputDef[], inputs: unknown, path: string): Float64Array {
+  const symbols = declared.map((d) => d.symbol);
+  const issues: InputIssue[] = [];
+  const values = new Float64Array(declared.length);
+  if (!inputs || typeof inputs !== 'object' || Array.isArray(inputs)) {
+    throw new InputError([{ path, message: `must be an object with the inputs ${symbols.join(', ')}` }]);
+  }
+  const given = inputs as Record<string, unknown>;
+  let unknown = 0;
+  for (const key of Object.keys(given)) {
+    // Bounded: a body with thousands of unknown keys gets a few messages and a count, not thousands.
+    if (!symbols.includes(key) && unknown++ < 5) issues.push({ path: `${path}.${key}`, message: `unknown input; this takes ${symbols.join(', ')}` });
+  }
+  if (unknown > 5) issues.push({ path, message: `${unknown - 5} more unknown inputs not listed` });
+  declared.forEach(({ symbol, unit: declaredUnit }, i) => {
+    const raw = Object.hasOwn(given, symbol) ? given[symbol] : undefined;
+    const p = `${path}.${symbol}`;
+    if (raw === undefined || raw === null) { issues.push({ path: p, message: 'is missing' }); return; }
+    let value: number;
+    if (typeof raw === 'number') value = raw;
+    else if (typeof raw === 'object' && !Array.isArray(raw) && 'value' in raw) {
+      const { value: v, unit } = raw as { value: unknown; unit?: unknown };
+      if (typeof v !== 'number' || !Number.isFinite(v)) { issues.push({ path: `${p}.value`, message: 'must be a finite number' }); return; }
+      if (unit === undefined || unit === null || unit === '') value = v;
+      else if (typeof unit !== 'string' || unit.length > 60) { issues.push({ path: `${p}.unit`, message: 'must be a unit string such as "degC"' }); return; }
+      else {
+        try {
+          value = convert(v, unit, declaredUnit);
+        } catch (err) {
+          issues.push({ path: `${p}.unit`, message: `${(err as Error).message}; ${symbol} is declared in ${isDimensionless(declaredUnit) ? 'no unit (dimensionless)' : `"${declaredUnit}"`}` });
+          return;
+        }
+      }
+    } else { issues.push({ path: p, message: 'must be a number or { "value": number, "unit": string }' }); return; }
+    if (!Number.isFinite(value)) { issues.push({ path: p, message: 'must be a finite number (not NaN or Infinity)' }); return; }
+    values[i] = value;
+  });
+  if (issues.length) throw new InputError(issues);
+  return values;
+}
+
 /** Compiles a definition (schema-checked, analysed) into a fast evaluator over plain numbers. */
 export function compileDefinition(definition: Definition): CompiledDefinition {
   const schemaIssues = checkDefinitionSchema(definition);
@@ -107,10 +182,7 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
   const { slots } = analysed;
   const slot = (s: string) => slots.get(s)!;
 
-  const limits: CompiledLimit[] = (definition.validity ?? []).map((l) => ({
-    symbol: l.symbol, min: l.min, max: l.max, minInclusive: l.minInclusive ?? true, maxInclusive: l.maxInclusive ?? true,
-    action: l.action ?? 'warn', note: l.note,
-  }));
+  const limits = compileLimits(definition.validity);
   const limitsOf = (symbol: string) => limits.map((l, i) => [l, i] as const).filter(([l]) => l.symbol === symbol);
 
   const tableData: Float64Array[] = [];
@@ -130,9 +202,10 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
       const ys = Float64Array.from(table.columns.find((c) => c.name === step.column)!.values);
       tableData.push(xs, ys);
       const tableLimit: CompiledLimit = { symbol: step.at, min: xs[0], max: xs[xs.length - 1], minInclusive: true, maxInclusive: true, action: 'warn', note: `table:${table.name}` };
+      // A published range inside the table already warns; a second warning for the same value would be noise.
+      const covered = limits.some((l) => l.symbol === step.at && !l.note?.startsWith('table:') && l.min !== undefined && l.max !== undefined && l.min >= xs[0] && l.max <= xs[xs.length - 1]);
       const already = limits.findIndex((l) => l.symbol === step.at && l.note === tableLimit.note);
-      const li = already >= 0 ? already : limits.push(tableLimit) - 1;
-      if (already < 0) lines.push(limitCheck(slot(step.at), li, tableLimit));
+      if (!covered && already < 0) lines.push(limitCheck(slot(step.at), limits.push(tableLimit) - 1, tableLimit));
       lines.push(`v[${k}] = T(D[${tableData.length - 2}], D[${tableData.length - 1}], v[${slot(step.at)}]);`);
     }
     for (const [l, i] of limitsOf(step.symbol)) lines.push(limitCheck(k, i, l));
@@ -150,7 +223,6 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
   const inputSymbols = definition.inputs.map((i) => i.symbol);
   const outputSymbols = definition.outputs.map((o) => o.symbol);
   const outputSlots = outputSymbols.map(slot);
-  const inputUnits = definition.inputs.map((i) => i.unit);
   const nSlots = slots.size;
 
   const runMany = (rows: Float64Array, count: number) => {
@@ -164,9 +236,7 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
     let pending: Warning[] | null = null;
     const W: WarnFn = (index, value) => {
       const lim = limits[index];
-      const w: Warning = { symbol: lim.symbol, value, message: limitMessage(lim, value) };
-      if (lim.min !== undefined) w.min = lim.min;
-      if (lim.max !== undefined) w.max = lim.max;
+      const w = warningOf(lim, value);
       if (lim.action === 'refuse') throw new EvaluationError('refused', `${w.message}. This limit is marked hard: no result is given.`, lim.symbol, [...(pending ?? []), w]);
       (pending ??= []).push(w);
     };
@@ -196,9 +266,7 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
     const warnings: Warning[] = [];
     const W: WarnFn = (index, value) => {
       const lim = limits[index];
-      const w: Warning = { symbol: lim.symbol, value, message: limitMessage(lim, value) };
-      if (lim.min !== undefined) w.min = lim.min;
-      if (lim.max !== undefined) w.max = lim.max;
+      const w = warningOf(lim, value);
       if (lim.action === 'refuse') {
         throw new EvaluationError('refused', `${w.message}. This limit is marked hard: no result is given.`, lim.symbol, [...warnings, w]);
       }
@@ -216,42 +284,7 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
     return { outputs, warnings };
   };
 
-  const readInputs = (inputs: unknown, path: string): Float64Array => {
-    const issues: InputIssue[] = [];
-    const values = new Float64Array(inputSymbols.length);
-    if (!inputs || typeof inputs !== 'object' || Array.isArray(inputs)) {
-      throw new InputError([{ path, message: `must be an object with the inputs ${inputSymbols.join(', ')}` }]);
-    }
-    const given = inputs as Record<string, unknown>;
-    for (const key of Object.keys(given)) {
-      if (!inputSymbols.includes(key)) issues.push({ path: `${path}.${key}`, message: `unknown input; this correlation takes ${inputSymbols.join(', ')}` });
-    }
-    inputSymbols.forEach((symbol, i) => {
-      const raw = given[symbol];
-      const p = `${path}.${symbol}`;
-      if (raw === undefined || raw === null) { issues.push({ path: p, message: 'is missing' }); return; }
-      let value: number;
-      if (typeof raw === 'number') value = raw;
-      else if (typeof raw === 'object' && !Array.isArray(raw) && 'value' in raw) {
-        const { value: v, unit } = raw as { value: unknown; unit?: unknown };
-        if (typeof v !== 'number' || !Number.isFinite(v)) { issues.push({ path: `${p}.value`, message: 'must be a finite number' }); return; }
-        if (unit === undefined || unit === null || unit === '') value = v;
-        else if (typeof unit !== 'string') { issues.push({ path: `${p}.unit`, message: 'must be a unit string such as "degC"' }); return; }
-        else {
-          try {
-            value = convert(v, unit, inputUnits[i]);
-          } catch (err) {
-            issues.push({ path: `${p}.unit`, message: `${(err as Error).message}; ${symbol} is declared in ${isDimensionless(inputUnits[i]) ? 'no unit (dimensionless)' : `"${inputUnits[i]}"`}` });
-            return;
-          }
-        }
-      } else { issues.push({ path: p, message: 'must be a number or { "value": number, "unit": string }' }); return; }
-      if (!Number.isFinite(value)) { issues.push({ path: p, message: 'must be a finite number (not NaN or Infinity)' }); return; }
-      values[i] = value;
-    });
-    if (issues.length) throw new InputError(issues);
-    return values;
-  };
+  const readInputs = (inputs: unknown, path: string) => readInputValues(definition.inputs, inputs, path);
 
   return {
     hash: sha256Hex(canonicalJson(definition)),
@@ -264,6 +297,9 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
     runMany,
     readInputs,
     evaluate: (inputs) => runValues(readInputs(inputs, 'inputs')),
+    exec: (v, W) => run(v, W, FUNCTION_IMPLS as never, solveStep, tableStep),
+    nSlots,
+    outputSlots,
     source,
   };
 }

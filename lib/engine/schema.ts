@@ -1,6 +1,7 @@
 import Ajv2020, { type ErrorObject } from 'ajv/dist/2020';
 import definitionSchema from '@/validation/definition.schema.json';
 import checkCaseSchema from '@/validation/check-case.schema.json';
+import templateSchema from '@/validation/template.schema.json';
 
 export interface SchemaIssue {
   /** JSON pointer into the document, e.g. /inputs/0/unit. */
@@ -11,6 +12,7 @@ export interface SchemaIssue {
 const ajv = new Ajv2020({ allErrors: true, strict: false, discriminator: true });
 const validateDefinition = ajv.compile(definitionSchema);
 const validateCheckCase = ajv.compile(checkCaseSchema);
+const validateTemplate = ajv.compile(templateSchema);
 
 function describe(e: ErrorObject): string {
   const p = e.params as Record<string, unknown>;
@@ -31,7 +33,12 @@ function describe(e: ErrorObject): string {
       if (e.schemaPath.includes('limit')) return 'a validity limit needs a min, a max, or both';
       if (e.schemaPath.includes('tolerance')) return 'a tolerance needs rel (relative), abs (absolute), or both';
       return 'does not match any allowed form';
-    case 'discriminator': return 'step "kind" must be "expression", "solve" or "table"';
+    case 'discriminator': {
+      const options = JSON.stringify((e.parentSchema as { oneOf?: unknown } | undefined)?.oneOf ?? '');
+      if (options.includes('choiceStep')) return 'step "kind" must be "correlation", "expression" or "choice"';
+      if (options.includes('correlationStep')) return 'an option\'s step "kind" must be "correlation" or "expression"';
+      return 'step "kind" must be "expression", "solve" or "table"';
+    }
     case 'minimum': return `must be at least ${p.limit}`;
     case 'maximum': return `must be at most ${p.limit}`;
     default: return e.message ?? 'is not valid';
@@ -63,4 +70,9 @@ export function checkCheckCaseSchema(checkCase: unknown): SchemaIssue[] {
   return validateCheckCase(checkCase) ? [] : toIssues(validateCheckCase.errors);
 }
 
-export { definitionSchema, checkCaseSchema };
+/** Every schema problem of a calculation template's definition. */
+export function checkTemplateSchema(definition: unknown): SchemaIssue[] {
+  return validateTemplate(definition) ? [] : toIssues(validateTemplate.errors);
+}
+
+export { definitionSchema, checkCaseSchema, templateSchema };

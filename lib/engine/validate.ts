@@ -1,9 +1,14 @@
-import { checkCheckCaseSchema, checkDefinitionSchema } from './schema';
-import { analyseDefinition, type DefinitionIssue, type Stage } from './analyse';
+import { checkCheckCaseSchema, checkDefinitionSchema, checkTemplateSchema } from './schema';
+import { analyseDefinition, DefinitionError, type DefinitionIssue, type Stage } from './analyse';
 import { checkDimensions } from './dimensions';
 import { compiled, EvaluationError, InputError, type CompiledDefinition } from './compile';
-import type { CheckCase, Definition, Warning } from './types';
+import { compileChain, type Resolve } from './chain';
+import type { CheckCase, Definition, InputDef, Warning } from './types';
+import type { TemplateDefinition } from './template-types';
 import { isLogRange } from './ranges';
+
+/** What running check cases needs of an evaluator: a compiled correlation or a compiled chain. */
+type Evaluator = Pick<CompiledDefinition, 'outputSymbols' | 'limits' | 'evaluate' | 'readInputs'> & { definition: { inputs: InputDef[] } };
 
 export const ENGINE_VERSION = '1.0.0';
 export const REPORT_FORMAT = 1;
@@ -43,7 +48,7 @@ export interface ValidationReport {
 
 const ORDER: Stage[] = ['schema', 'expressions', 'symbols', 'dimensions', 'check-cases', 'coverage'];
 
-function runCase(c: CompiledDefinition, cc: CheckCase, index: number): CaseResult {
+function runCase(c: Evaluator, cc: CheckCase, index: number): CaseResult {
   const expectedWarnings = [...(cc.expectWarnings ?? [])].sort();
   const result: CaseResult = {
     index, label: cc.label, passed: false, sourceKind: cc.source.kind, citation: cc.source.citation, locator: cc.source.locator,
@@ -89,7 +94,7 @@ function runCase(c: CompiledDefinition, cc: CheckCase, index: number): CaseResul
   return result;
 }
 
-function coverageOf(c: CompiledDefinition, cases: CheckCase[], results: CaseResult[]): ValidationReport['coverage'] {
+function coverageOf(c: Evaluator, cases: CheckCase[], results: CaseResult[]): ValidationReport['coverage'] {
   const entries: CoverageEntry[] = [];
   const inRange = new Set(cases.filter((_, i) => results[i].warnings.length === 0 && !cases[i].expectRefusal));
   // Each case's inputs in declared units, read once (null when they cannot be read).
@@ -122,12 +127,9 @@ function coverageOf(c: CompiledDefinition, cases: CheckCase[], results: CaseResu
   return { entries, oneCorner, message };
 }
 
-/**
- * Runs the full validation of a version: schema → expression safety → symbols → dimensions →
- * every check case → coverage. Stops compiling at the first failing static stage but always
- * reports what it found.
- */
-export function validateVersion(definition: unknown, checkCases: unknown[]): ValidationReport {
+type Compile = (definition: unknown, add: (issues: DefinitionIssue[]) => void, passed: (s: Stage) => boolean) => Evaluator | null;
+
+function validateWith(definition: unknown, checkCases: unknown[], schemaIssues: (d: unknown) => { pointer: string; message: string }[], compile: Compile): ValidationReport {
   const stages: ValidationReport['stages'] = ORDER.map((stage) => ({ stage, passed: true, issues: [] }));
   const stage = (s: Stage) => stages.find((x) => x.stage === s)!;
   const add = (issues: DefinitionIssue[]) => {
@@ -145,7 +147,7 @@ export function validateVersion(definition: unknown, checkCases: unknown[]): Val
     };
   };
 
-  add(checkDefinitionSchema(definition).map((i) => ({ stage: 'schema' as const, ...i })));
+  add(schemaIssues(definition).map((i) => ({ stage: 'schema' as const, ...i })));
   if (!Array.isArray(checkCases)) {
     add([{ stage: 'schema', pointer: '/checkCases', message: 'check cases must be a list' }]);
     return report();
@@ -153,14 +155,8 @@ export function validateVersion(definition: unknown, checkCases: unknown[]): Val
   checkCases.forEach((cc, i) => add(checkCheckCaseSchema(cc).map((x) => ({ stage: 'schema' as const, pointer: `/checkCases/${i}${x.pointer === '/' ? '' : x.pointer}`, message: x.message }))));
   if (!stage('schema').passed) return report();
 
-  const def = definition as Definition;
-  const { analysed, issues } = analyseDefinition(def);
-  add(issues);
-  if (!analysed) return report();
-  add(checkDimensions(analysed));
-  if (!stage('dimensions').passed) return report();
-
-  const c = compiled(def);
+  const c = compile(definition, add, (s) => stage(s).passed);
+  if (!c) return report();
   const cases = (checkCases as CheckCase[]).map((cc, i) => runCase(c, cc, i));
   const checkStage = stage('check-cases');
   if (cases.length === 0) {
@@ -179,4 +175,38 @@ export function validateVersion(definition: unknown, checkCases: unknown[]): Val
     stage('coverage').issues.push({ stage: 'coverage', pointer: '/checkCases', message: coverage.message });
   }
   return report(cases, coverage);
+}
+
+/**
+ * Runs the full validation of a correlation version: schema → expression safety → symbols →
+ * dimensions → every check case → coverage. Stops compiling at the first failing static stage but
+ * always reports what it found.
+ */
+export function validateVersion(definition: unknown, checkCases: unknown[]): ValidationReport {
+  return validateWith(definition, checkCases, checkDefinitionSchema, (d, add, passed) => {
+    const def = d as Definition;
+    const { analysed, issues } = analyseDefinition(def);
+    add(issues);
+    if (!analysed) return null;
+    add(checkDimensions(analysed));
+    if (!passed('dimensions')) return null;
+    return compiled(def);
+  });
+}
+
+/**
+ * Validation of a calculation template version: the same stages, where "symbols" also covers the
+ * pinned correlation versions (each must exist, be approved and match its content hash: `resolve`
+ * says so) and "dimensions" every binding between steps. Check cases run through the whole chain.
+ */
+export function validateTemplate(definition: unknown, checkCases: unknown[], resolve: Resolve): ValidationReport {
+  return validateWith(definition, checkCases, checkTemplateSchema, (d, add) => {
+    try {
+      return compileChain(d as TemplateDefinition, resolve);
+    } catch (err) {
+      if (!(err instanceof DefinitionError)) throw err;
+      add(err.issues);
+      return null;
+    }
+  });
 }
