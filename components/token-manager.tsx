@@ -18,14 +18,14 @@ export function TokenManager({ all = false }: { all?: boolean }) {
   const qc = useQueryClient();
   const key = ['tokens', all];
   const tokens = useQuery({ queryKey: key, queryFn: () => api<{ items: TokenRow[] }>(`/api/tokens${all ? '?all=1' : ''}`) });
-  const [form, setForm] = useState({ name: '', read: true, evaluate: true, expiresInDays: '90' });
+  const [form, setForm] = useState({ name: '', read: true, evaluate: true, write: false, expiresInDays: '90' });
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [created, setCreated] = useState<string | null>(null);
   const create = useMutation({
     mutationFn: () => api<{ token: string }>('/api/tokens', {
       body: {
         name: form.name,
-        scopes: [form.read && 'read', form.evaluate && 'evaluate'].filter(Boolean),
+        scopes: [form.read && 'read', form.evaluate && 'evaluate', form.write && 'write'].filter(Boolean),
         expiresInDays: form.expiresInDays.trim() === '' ? null : Number(form.expiresInDays),
       },
     }),
@@ -48,6 +48,7 @@ export function TokenManager({ all = false }: { all?: boolean }) {
           <legend className="text-sm font-medium">Scopes</legend>
           <label className="flex items-center gap-1 text-sm"><input type="checkbox" checked={form.read} onChange={(e) => setForm({ ...form, read: e.target.checked })} />read</label>
           <label className="flex items-center gap-1 text-sm"><input type="checkbox" checked={form.evaluate} onChange={(e) => setForm({ ...form, evaluate: e.target.checked })} />evaluate</label>
+          <label className="flex items-center gap-1 text-sm" title="author drafts and save calculations"><input type="checkbox" checked={form.write} onChange={(e) => setForm({ ...form, write: e.target.checked })} />write</label>
           {errors.scopes && <p className="text-xs text-danger">{errors.scopes}</p>}
         </fieldset>
         <div className="sm:col-span-3 flex items-center gap-3">

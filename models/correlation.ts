@@ -7,9 +7,14 @@ import { jsonColumn } from './json';
 export const VERSION_STATUSES = ['draft', 'in_review', 'approved', 'superseded', 'returned', 'withdrawn'] as const;
 export type VersionStatus = (typeof VERSION_STATUSES)[number];
 
+export const ENTRY_KINDS = ['correlation', 'template'] as const;
+export type EntryKind = (typeof ENTRY_KINDS)[number];
+
 export class Correlation extends Model<InferAttributes<Correlation>, InferCreationAttributes<Correlation>> {
   declare id: CreationOptional<number>;
   declare slug: string;
+  /** A correlation, or a calculation template governed by the same life cycle. */
+  declare kind: CreationOptional<EntryKind>;
   declare title: string;
   declare category: string;
   declare situation: CreationOptional<string>;
@@ -87,6 +92,7 @@ export function initCorrelation(sequelize: Sequelize) {
     {
       id,
       slug: { type: DataTypes.STRING(100), allowNull: false, unique: true },
+      kind: { type: DataTypes.STRING(20), allowNull: false, defaultValue: 'correlation' },
       title: { type: DataTypes.STRING(200), allowNull: false },
       category: { type: DataTypes.STRING(40), allowNull: false },
       situation: { type: DataTypes.STRING(120), allowNull: false, defaultValue: '' },

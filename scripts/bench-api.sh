@@ -7,8 +7,8 @@ cd "$ROOT"
 bash scripts/ensure-deps.sh
 . scripts/env.sh
 bash scripts/db.sh start >/dev/null
-npx tsx scripts/migrate.ts up >/dev/null
-npx tsx scripts/seed.ts up >/dev/null
+bash scripts/tsx.sh scripts/migrate.ts up >/dev/null
+bash scripts/tsx.sh scripts/seed.ts up >/dev/null
 [ -f .next/BUILD_ID ] || ./node_modules/.bin/next build >"$DATA_DIR/build-bench.log" 2>&1
 export BENCH_URL="http://127.0.0.1:3200"
 export NEXTAUTH_URL="$BENCH_URL"
@@ -18,4 +18,4 @@ export RATE_LIMIT_PER_MINUTE=100000000
 SERVER=$!
 trap 'kill $SERVER 2>/dev/null || true' EXIT
 for _ in $(seq 1 60); do curl -fsS "$BENCH_URL/api/health" >/dev/null 2>&1 && break; sleep 0.5; done
-npx tsx scripts/bench-api.ts "$@"
+bash scripts/tsx.sh scripts/bench-api.ts "$@"

@@ -14,8 +14,8 @@ if ! (exec 3<>"/dev/tcp/127.0.0.1/$SMTP_PORT") 2>/dev/null; then
   nohup node --import tsx scripts/fake-smtp.ts >"$DATA_DIR/fake-smtp.log" 2>&1 &
   echo "Fake SMTP server started on 127.0.0.1:$SMTP_PORT (mail kept in .data/mail)"
 fi
-npx tsx scripts/migrate.ts up
-npx tsx scripts/seed.ts up
+bash scripts/tsx.sh scripts/migrate.ts up
+bash scripts/tsx.sh scripts/seed.ts up
 echo "Building the application…"
 ./node_modules/.bin/next build >"$DATA_DIR/build.log" 2>&1 || { tail -40 "$DATA_DIR/build.log"; exit 1; }
 cat <<MSG

@@ -45,8 +45,8 @@ echo "== type-check"
 ./node_modules/.bin/tsc --noEmit
 
 echo "== migrations and seed (test database $DB_NAME)"
-npx tsx scripts/migrate.ts up
-npx tsx scripts/seed.ts up
+bash scripts/tsx.sh scripts/migrate.ts up
+bash scripts/tsx.sh scripts/seed.ts up
 
 echo "== production build"
 ./node_modules/.bin/next build >"$DATA_DIR/build-test.log" 2>&1 || { tail -60 "$DATA_DIR/build-test.log"; exit 1; }

@@ -1,6 +1,9 @@
 import { db } from '@/models';
 import { addComment, createCorrelation, createDraftVersion, decideVersion, submitVersion, updateDraft, withdrawVersion } from '@/lib/governance/lifecycle';
 import { recordUsage } from '@/lib/api/usage';
+import { createProject, setProjectMember } from '@/lib/calculations/projects';
+import { saveCalculation } from '@/lib/calculations/records';
+import { QueryTypes } from 'sequelize';
 import { DEMO_PASSWORD, demoActor } from './20261201000100-demo-users';
 
 export const name = '20261201000300-demo-scenario';
@@ -51,6 +54,46 @@ const finArray = {
   notes: 'Shape of the Bar-Cohen & Rohsenow (1984) optimum-spacing composite, scaled by an in-house factor 1.07. Draft: awaiting the second test series.',
 };
 
+export const DEMO_PROJECT = 'TW-7 outdoor telecom cabinet: thermal design';
+
+/** The engineer's project for the TW-7 cabinet; the approver reviews it, the methods engineer may edit. */
+export async function demoProject() {
+  const { Project } = db();
+  const found = await Project.findOne({ where: { name: DEMO_PROJECT } });
+  if (found) return found;
+  const engineer = await demoActor('engineer@demo.example');
+  const { id } = await createProject({ actor: engineer, name: DEMO_PROJECT, description: 'Cooling of the TW-7 outdoor cabinet (invented demo scenario): door and wall heat loss, rectifier cold plate, intake louvre and fan selection.' });
+  await setProjectMember({ actor: engineer, projectId: id, email: 'author@demo.example', role: 'editor' });
+  await setProjectMember({ actor: engineer, projectId: id, email: 'approver@demo.example', role: 'reviewer' });
+  return (await Project.findByPk(id))!;
+}
+
+/** A chain of the engineer's own: air density at the intake, blade Reynolds number, the louvre's K, Δp. */
+async function louvreChain() {
+  const { sequelize } = db();
+  const hash = async (slug: string, version: number) => (await sequelize.query<{ h: string }>(
+    'SELECT v.content_hash AS h FROM correlation_versions v JOIN correlations c ON c.id = v.correlation_id WHERE c.slug = ? AND v.version = ?',
+    { replacements: [slug, version], type: QueryTypes.SELECT }))[0].h;
+  return {
+    schemaVersion: 1, kind: 'template', title: 'Intake louvre pressure drop', summary: 'Pressure drop of the LP-40 intake louvre at a face velocity: air properties, density at the site pressure, blade Reynolds number, loss coefficient.',
+    category: 'internal-flow', situation: 'louvre panel',
+    inputs: [
+      { symbol: 'u_face', name: 'face velocity', unit: 'm/s' }, { symbol: 'b', name: 'blade pitch', unit: 'm' }, { symbol: 'sigma', name: 'open-area ratio', unit: '1' },
+      { symbol: 'T', name: 'intake air temperature', unit: 'K' }, { symbol: 'p', name: 'site pressure', unit: 'Pa' },
+    ],
+    constants: [{ symbol: 'M_air', name: 'molar mass of dry air', value: 0.0289647, unit: 'kg/mol' }],
+    steps: [
+      { key: 'air', kind: 'correlation', title: 'Air viscosity at the intake', use: { slug: 'air-properties-1atm', version: 1, contentHash: await hash('air-properties-1atm', 1) }, inputs: { T: 'T' }, outputs: { mu: 'mu' } },
+      { key: 'density', kind: 'correlation', title: 'Air density at the site pressure', use: { slug: 'ideal-gas-density', version: 1, contentHash: await hash('ideal-gas-density', 1) }, inputs: { p: 'p', T: 'T', M: 'M_air' }, outputs: { rho: 'rho' } },
+      { key: 'reynolds', kind: 'expression', title: 'Blade-pitch Reynolds number', outputs: [{ symbol: 'Re_h', name: 'Reynolds number on blade pitch', unit: '1', expression: 'rho * u_face * b / mu' }] },
+      { key: 'loss', kind: 'correlation', title: 'LP-40 loss coefficient', use: { slug: 'brightwater-louvre-pressure-loss', version: 1, contentHash: await hash('brightwater-louvre-pressure-loss', 1) }, inputs: { Re_h: 'Re_h', sigma: 'sigma' }, outputs: { K: 'K' } },
+      { key: 'pressure-drop', kind: 'expression', title: 'Pressure drop', outputs: [{ symbol: 'dp', name: 'pressure drop across the louvre', unit: 'Pa', expression: 'K * rho * u_face^2 / 2' }] },
+    ],
+    outputs: [{ symbol: 'Re_h', name: 'Reynolds number on blade pitch' }, { symbol: 'K', name: 'loss coefficient' }, { symbol: 'dp', name: 'pressure drop' }],
+    references: [{ citation: REPORT, locator: 'Section 4' }],
+  };
+}
+
 export async function up(): Promise<void> {
   const { Correlation } = db();
   const author = await demoActor('author@demo.example');
@@ -70,6 +113,9 @@ export async function up(): Promise<void> {
     const v1 = await CorrelationVersion.findOne({ where: { correlationId: c!.id, version: 1 } });
     recordUsage({ userId: engineer.id, tokenId: null, versionId: v1!.id, evaluations: 14 });
     recordUsage({ userId: integrator.id, tokenId: null, versionId: v1!.id, evaluations: 220 });
+    // The engineer's intake-louvre calculation for the TW-7 fan selection was saved with version 1.
+    const project = await demoProject();
+    await saveCalculation({ actor: engineer, tokenId: null, request: { project: project.id, title: 'TW-7 intake louvre pressure drop at the design air flow', note: 'fan selection, first pass', chain: await louvreChain(), inputs: { u_face: 2.4, b: { value: 18, unit: 'mm' }, sigma: 0.45, T: { value: 35, unit: 'degC' }, p: { value: 99.5, unit: 'kPa' } } } });
     await withdrawVersion({ actor: approver2, slug, version: 1, reason: 'The rig flow meter was found out of calibration (reads 6 % high); K values of test series 1 are too low. Do not use for TW-7 fan selection.' });
     await createDraftVersion({ actor: author, slug, fromVersion: 1 });
     await updateDraft({ actor: author, slug, version: 2, definition: louvre(2.1), checkCases: louvreCases(2.1) });
@@ -93,5 +139,6 @@ export async function up(): Promise<void> {
 
 export async function down(): Promise<void> {
   const { Correlation } = db();
+  await db().Project.destroy({ where: { name: DEMO_PROJECT } });
   await Correlation.destroy({ where: { slug: ['brightwater-louvre-pressure-loss', 'brightwater-fin-array-natural-convection'] } });
 }

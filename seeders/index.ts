@@ -1,6 +1,8 @@
 import * as demoUsers from './20261201000100-demo-users';
 import * as standardLibrary from './20261201000200-standard-library';
 import * as demoScenario from './20261201000300-demo-scenario';
+import * as templates from './20261202000100-calculation-templates';
+import * as demoCalculations from './20261202000200-demo-calculations';
 
 export interface Seeder {
   name: string;
@@ -9,4 +11,4 @@ export interface Seeder {
 }
 
 /** Seeders in order; tracked in their own table, so each runs once per database. */
-export const seeders: Seeder[] = [demoUsers, standardLibrary, demoScenario];
+export const seeders: Seeder[] = [demoUsers, standardLibrary, demoScenario, templates, demoCalculations];

@@ -113,3 +113,66 @@ export const compareBody = z.object({
   to: z.number().optional(),
   points: z.number().int().min(2).max(400).default(80),
 }).strict();
+
+// Calculation templates, projects and saved calculations.
+export const templatesQuery = z.object({
+  q: z.string().max(100).optional(),
+  page: z.coerce.number().int().min(1).default(1),
+  pageSize: z.coerce.number().int().min(1).max(200, 'at most 200').default(50),
+}).strict();
+
+export const templateListAnswer = z.object({
+  items: z.array(z.object({
+    slug: z.string(), title: z.string(), category: z.string(), situation: z.string(),
+    version: z.number().int().nullable().describe('the latest approved version'), contentHash: z.string().nullable(), status: z.enum(VERSION_STATUSES).nullable(),
+  })),
+  total: z.number().int(),
+});
+
+const pin = z.object({ slug: z.string(), version: z.number().int(), contentHash: z.string() });
+export const chainWarning = warning.extend({ step: z.string().describe('key of the step where the warning arose ("inputs", "template" or a step key)') });
+export const stepRecord = z.object({
+  key: z.string(), title: z.string(), kind: z.enum(['correlation', 'expression']),
+  correlation: pin.nullable().describe('the pinned correlation version this step evaluated; null for arithmetic'),
+  choice: z.object({ key: z.string(), title: z.string(), rule: z.string(), picked: z.string(), options: z.array(z.string()) }).optional()
+    .describe('set when a choice picked this step: the rule and the option picked'),
+  inputs: z.record(z.string(), z.number()).describe('what the step took, in the units it takes them'),
+  outputs: z.record(z.string(), z.number()), units: z.record(z.string(), z.string()), warnings: z.array(chainWarning),
+});
+
+export const runBody = evaluateBody;
+export const runAnswer = z.object({
+  slug: z.string().nullable(), version: z.number().int().nullable(), contentHash: z.string().nullable(), status: z.enum(VERSION_STATUSES).nullable(), title: z.string(),
+  units: z.record(z.string(), z.string()).describe('unit of each output'),
+  steps: z.array(stepRecord).optional(), outputs: z.record(z.string(), z.number()).optional(),
+  warnings: z.array(chainWarning).optional().describe('every warning of every step, with the step key'),
+  results: z.array(z.object({
+    outputs: z.record(z.string(), z.number()).nullable(), warnings: z.array(chainWarning),
+    picked: z.record(z.string(), z.string().nullable()).describe('choice key → option picked'),
+    error: z.object({ code: z.string(), message: z.string() }).optional(),
+  })).optional(),
+});
+
+export const idParam = z.object({ id: z.coerce.number().int('must be a whole number').positive('must be 1 or more') });
+export const createProjectBody = z.object({
+  name: z.string().trim().min(2, 'Give the project a name').max(160, 'At most 160 characters'),
+  description: z.string().max(2000, 'At most 2,000 characters').default(''),
+}).strict();
+export const memberBody = z.object({
+  email: z.string().trim().email('Enter an e-mail address').max(190),
+  role: z.enum(['editor', 'reviewer']).nullable().describe('null removes the member'),
+}).strict();
+
+export const saveCalculationBody = z.object({
+  project: z.number().int().positive().describe('project id'),
+  title: z.string().trim().min(2, 'Give the calculation a title').max(200, 'At most 200 characters'),
+  note: z.string().max(500).optional().describe('what changed in this revision'),
+  calculation: z.number().int().positive().optional().describe('save as the next revision of this calculation'),
+  template: z.object({ slug: slugParam, version: z.number().int().positive().optional() }).strict().optional(),
+  chain: z.record(z.string(), z.unknown()).optional().describe('your own chain of steps (the template JSON Schema), instead of a template'),
+  inputs: z.record(z.string(), z.unknown()).optional(),
+  rows: z.array(z.unknown()).max(10_000, 'at most 10,000 rows').optional(),
+}).strict().refine((b) => (b.inputs === undefined) !== (b.rows === undefined), { message: 'send either "inputs" or "rows", not both and not neither', path: ['inputs'] });
+
+export const calculationsQuery = z.object({ project: z.coerce.number().int().positive('must be a project id') }).strict();
+export const calculationQuery = z.object({ revision: z.coerce.number().int().positive().optional() }).strict();

@@ -5,7 +5,8 @@ import { AppError } from '@/lib/http/errors';
 import { appendAuditEvent } from '@/lib/audit/log';
 import { userLabels } from '@/lib/auth/labels';
 
-export const TOKEN_SCOPES = ['read', 'evaluate'] as const;
+/** read: look up; evaluate: evaluate and run (rate-limited); write: author drafts and save calculations. */
+export const TOKEN_SCOPES = ['read', 'evaluate', 'write'] as const;
 export type TokenScope = (typeof TOKEN_SCOPES)[number];
 const TOKEN_PREFIX = 'crl_';
 

@@ -6,13 +6,19 @@ import { enqueueMail, deliverPendingMail, isMailDeferred, type MailMessage } fro
 import { usersWithRole, findUserById, type AuthUser } from '@/lib/auth/users';
 import { verifyPassword } from '@/lib/auth/passwords';
 import { validateVersion, type ValidationReport } from '@/lib/engine/validate';
-import { checkCheckCaseSchema, checkDefinitionSchema } from '@/lib/engine/schema';
+import { checkCheckCaseSchema, checkDefinitionSchema, checkTemplateSchema } from '@/lib/engine/schema';
+import { validateTemplate } from '@/lib/engine/validate';
+import { isTemplateDefinition, pinsOf, type TemplateDefinition } from '@/lib/engine/template-types';
+import { resolvePins } from '@/lib/evaluation/verified';
+import type { EntryKind } from '@/models';
 import { contentHash } from '@/lib/engine/canonical';
 import type { CheckCase, Definition } from '@/lib/engine/types';
 import { MEANING_OF_APPROVAL, MEANING_OF_RETURN, MEANING_OF_WITHDRAWAL } from './access';
 import { assertIntact } from './integrity';
-import { flushUsage } from '@/lib/api/usage';
+import { usesOfVersion, peopleToTell } from './uses';
 import { checkCasesOfVersion } from './check-cases';
+import { loadPinnedVersions } from './servable';
+import { PUBLISHED } from './access';
 
 export const SLUG_PATTERN = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
 
@@ -59,15 +65,29 @@ function versionLink(slug: string, version: number) {
 }
 
 /** A draft may still fail its check cases, but its definition and check cases must fit their schemas. */
-function assertSchemaValid(definition: unknown, checkCases: unknown[] | undefined) {
+function assertSchemaValid(definition: unknown, checkCases: unknown[] | undefined, kind: EntryKind) {
+  const schema = kind === 'template' ? checkTemplateSchema : checkDefinitionSchema;
   const issues = [
-    ...(definition === undefined ? [] : checkDefinitionSchema(definition).map((i) => ({ path: `definition${i.pointer === '/' ? '' : i.pointer}`, message: i.message }))),
+    ...(definition === undefined ? [] : schema(definition).map((i) => ({ path: `definition${i.pointer === '/' ? '' : i.pointer}`, message: i.message }))),
     ...(checkCases ?? []).flatMap((cc, n) => checkCheckCaseSchema(cc).map((i) => ({ path: `checkCases/${n}${i.pointer === '/' ? '' : i.pointer}`, message: i.message }))),
   ];
   if (issues.length) {
     const list = issues.slice(0, 3).map((i) => `${i.path}: ${i.message}`).join('; ');
     throw new AppError('invalid:definition', `Not saved: ${issues.length} schema problem${issues.length === 1 ? '' : 's'} — ${list}${issues.length > 3 ? '; …' : ''}`, { issues });
   }
+}
+
+const kindOf = (definition: unknown): EntryKind => (isTemplateDefinition(definition) ? 'template' : 'correlation');
+
+/**
+ * The full validation of a version's content by its kind. A template's pinned correlation versions
+ * are loaded and integrity-checked first; each must exist, be approved and match its hash.
+ */
+export async function validateContent({ kind, definition, checkCases, transaction }: { kind: EntryKind; definition: unknown; checkCases: unknown[]; transaction?: Transaction }): Promise<ValidationReport> {
+  if (kind === 'correlation') return validateVersion(definition, checkCases);
+  const pins = checkTemplateSchema(definition).length ? [] : pinsOf(definition as TemplateDefinition);
+  const { resolve } = await resolvePins(pins, { forApproval: true, transaction });
+  return validateTemplate(definition, checkCases, resolve);
 }
 
 export interface DraftContent {
@@ -88,23 +108,24 @@ function correlationMeta(definition: unknown) {
 /** A new correlation with its first draft. The slug is its stable, public identifier. */
 export async function createCorrelation({ actor, slug, definition, checkCases }: { actor: AuthUser; slug: string } & DraftContent) {
   requireRole(actor, 'author');
+  const kind = kindOf(definition);
   if (!SLUG_PATTERN.test(slug) || slug.length > 100) {
     throw new AppError('invalid:slug', 'The slug must be lower-case words joined by hyphens, e.g. "cylinder-crossflow-hilpert".', { issues: [{ path: 'slug', message: 'lower-case letters, digits and hyphens only' }] });
   }
-  assertSchemaValid(definition, checkCases);
+  assertSchemaValid(definition, checkCases, kind);
   const { sequelize, Correlation, CorrelationVersion } = db();
   return sequelize.transaction(async (transaction) => {
     if (await Correlation.findOne({ where: { slug }, transaction })) {
       throw new AppError('conflict:slug', `A correlation with the slug "${slug}" already exists.`, { issues: [{ path: 'slug', message: 'already in use' }] });
     }
     const meta = correlationMeta(definition);
-    const c = await Correlation.create({ slug, ownerId: actor.id, ...meta }, { transaction });
+    const c = await Correlation.create({ slug, kind, ownerId: actor.id, ...meta }, { transaction });
     const v = await CorrelationVersion.create({
       correlationId: c.id, version: 1, status: 'draft', definition, contentHash: null, authorId: actor.id,
       submittedAt: null, approvedAt: null, approvedById: null, returnedAt: null, supersededAt: null, withdrawnAt: null, withdrawnReason: null,
     }, { transaction });
     await replaceCheckCases(v.id, checkCases as CheckCase[], transaction);
-    await appendAuditEvent({ transaction, event: { actorId: actor.id, action: 'correlation.created', entityType: 'correlation', entityId: slug, details: { version: 1 } } });
+    await appendAuditEvent({ transaction, event: { actorId: actor.id, action: 'correlation.created', entityType: 'correlation', entityId: slug, details: { version: 1, kind } } });
     return { slug, version: 1 };
   });
 }
@@ -116,8 +137,12 @@ export async function createDraftVersion({ actor, slug, fromVersion }: { actor: 
   return sequelize.transaction(async (transaction) => {
     const c = await lockedCorrelation(slug, transaction);
     const versions = await CorrelationVersion.findAll({ where: { correlationId: c.id }, order: [['version', 'DESC']], transaction });
-    const source = fromVersion ? versions.find((v) => v.version === fromVersion) : versions[0];
-    if (!source) throw new AppError('not_found:version', `Correlation "${slug}" has no version ${fromVersion}.`);
+    // Unpublished work (drafts, versions in review, returned ones) is its owner's: only they, the
+    // correlation's owner or an admin may copy it; anyone else starts from a published version.
+    const mayCopy = (v: CorrelationVersion) => PUBLISHED.includes(v.status) || v.authorId === actor.id || c.ownerId === actor.id || actor.roles.includes('admin');
+    const source = fromVersion ? versions.find((v) => v.version === fromVersion) : versions.find(mayCopy);
+    if (!source) throw new AppError('not_found:version', fromVersion ? `Correlation "${slug}" has no version ${fromVersion}.` : `Correlation "${slug}" has no published version to start from.`);
+    if (!mayCopy(source)) throw new AppError('forbidden:unpublished-version', `Version ${source.version} of "${slug}" is not published; only its author or the correlation's owner may start a new version from it.`);
     const openDraft = versions.find((v) => v.status === 'draft' && v.authorId === actor.id);
     if (openDraft) throw new AppError('conflict:open-draft', `You already have a draft of "${slug}" (version ${openDraft.version}); edit or submit it first.`);
     const number = (versions[0]?.version ?? 0) + 1;
@@ -133,22 +158,42 @@ export async function createDraftVersion({ actor, slug, fromVersion }: { actor: 
 
 /** Saves a draft's definition and/or check cases. Only the author, only while it is a draft. */
 export async function updateDraft({ actor, slug, version, definition, checkCases }: { actor: AuthUser; slug: string; version: number } & Partial<DraftContent>) {
-  assertSchemaValid(definition, checkCases);
   const { sequelize, Correlation } = db();
   const result = await sequelize.transaction(async (transaction) => {
     const c = await lockedCorrelation(slug, transaction);
     const v = await lockedVersion(c.id, slug, version, transaction);
     if (v.authorId !== actor.id) throw new AppError('forbidden:not-author', 'Only the author of a draft can change it.');
     if (v.status !== 'draft') throw new AppError('conflict:frozen', `Version ${version} is ${v.status.replace('_', ' ')} and can no longer change; start a new version.`);
+    if (definition !== undefined && kindOf(definition) !== c.kind) {
+      throw new AppError('invalid:definition', `"${slug}" is a ${c.kind === 'template' ? 'calculation template' : 'correlation'}; a new version must stay one.`, { issues: [{ path: 'definition/kind', message: c.kind === 'template' ? 'must be "template"' : 'a correlation definition has no "kind"' }] });
+    }
+    assertSchemaValid(definition, checkCases, c.kind);
     if (definition !== undefined) {
       await v.update({ definition }, { transaction });
-      if (version === 1 || !(await hasPublished(c.id, transaction))) await Correlation.update(correlationMeta(definition), { where: { id: c.id }, transaction });
+      // Only the owner renames the entry, and only while nothing of it is published.
+      if (c.ownerId === actor.id && (version === 1 || !(await hasPublished(c.id, transaction)))) await Correlation.update(correlationMeta(definition), { where: { id: c.id }, transaction });
     }
     if (checkCases !== undefined) await replaceCheckCases(v.id, checkCases as CheckCase[], transaction);
     await appendAuditEvent({ transaction, event: { actorId: actor.id, action: 'version.edited', entityType: 'version', entityId: `${slug}@${version}`, details: { definition: definition !== undefined, checkCases: checkCases?.length ?? null } } });
     return { slug, version };
   });
   return result;
+}
+
+/** Remembers which correlation versions a template version pins ("what uses this version"). */
+async function recordDependencies(templateVersionId: number, definition: TemplateDefinition, transaction: Transaction) {
+  const { TemplateDependency } = db();
+  const pinned = await loadPinnedVersions(pinsOf(definition), transaction);
+  await TemplateDependency.bulkCreate([...pinned.values()].map((p) => ({ templateVersionId, versionId: p.id })), { transaction, ignoreDuplicates: true });
+}
+
+/** A template may be signed only while every correlation version it pins is still approved. */
+async function assertPinsApproved(definition: TemplateDefinition, transaction: Transaction) {
+  const pinned = await loadPinnedVersions(pinsOf(definition), transaction);
+  const stale = [...pinned.values()].filter((p) => p.status !== 'approved');
+  if (stale.length) {
+    throw new AppError('conflict:pinned-version', `This template pins ${stale.map((p) => `${p.slug} version ${p.version} (${p.status.replace('_', ' ')})`).join(', ')}; a new template version must pin approved versions before it can be approved.`);
+  }
 }
 
 async function hasPublished(correlationId: number, transaction: Transaction) {
@@ -162,7 +207,7 @@ export async function previewValidation({ actor, slug, version }: { actor: AuthU
   const c = await Correlation.findOne({ where: { slug } });
   const v = c && await CorrelationVersion.findOne({ where: { correlationId: c.id, version } });
   if (!c || !v || (v.authorId !== actor.id && !actor.roles.includes('approver'))) throw new AppError('not_found:version', `Correlation "${slug}" has no version ${version} you can see.`);
-  return validateVersion(v.definition, await checkCasesOfVersion(v.id));
+  return validateContent({ kind: c.kind, definition: v.definition, checkCases: await checkCasesOfVersion(v.id) });
 }
 
 /**
@@ -178,7 +223,7 @@ export async function submitVersion({ actor, slug, version }: { actor: AuthUser;
     if (v.authorId !== actor.id) throw new AppError('forbidden:not-author', 'Only the author can submit a version.');
     if (v.status !== 'draft') throw new AppError('conflict:version-state', `Version ${version} is ${v.status.replace('_', ' ')}, not a draft; it cannot be submitted.`);
     const checkCases = await checkCasesOfVersion(v.id, transaction);
-    const report = validateVersion(v.definition, checkCases);
+    const report = await validateContent({ kind: c.kind, definition: v.definition, checkCases, transaction });
     if (!report.passed) {
       const problems = report.stages.flatMap((s) => s.issues).filter((i) => i.stage !== 'coverage');
       throw new AppError('invalid:validation-failed', `Validation failed (${problems.length} problem${problems.length === 1 ? '' : 's'}); fix them before submitting.`, { report, issues: problems.map((p) => ({ path: p.pointer, message: p.message })) });
@@ -186,6 +231,7 @@ export async function submitVersion({ actor, slug, version }: { actor: AuthUser;
     const hash = contentHash(v.definition, checkCases);
     await v.update({ status: 'in_review', contentHash: hash, submittedAt: new Date() }, { transaction });
     await ValidationRun.create({ versionId: v.id, engineVersion: report.engineVersion, passed: true, report }, { transaction });
+    if (c.kind === 'template') await recordDependencies(v.id, v.definition as TemplateDefinition, transaction);
     await appendAuditEvent({ transaction, event: { actorId: actor.id, action: 'version.submitted', entityType: 'version', entityId: `${slug}@${version}`, afterHash: hash, details: { checkCases: checkCases.length, coverage: report.coverage.message } } });
     const approvers = (await usersWithRole({ role: 'approver' })).filter((u) => u.id !== actor.id);
     await enqueueMail({ transaction, messages: approvers.map((a): MailMessage => ({
@@ -230,6 +276,7 @@ export async function decideVersion({ actor, slug, version, decision, comment, p
     }
     const run = await ValidationRun.findOne({ where: { versionId: v.id }, order: [['id', 'DESC']], transaction });
     if (!run?.passed) throw new AppError('conflict:validation-failed', 'This version has no passing validation run and cannot be approved.');
+    if (decision === 'approve' && c.kind === 'template') await assertPinsApproved(v.definition as TemplateDefinition, transaction);
     const now = new Date();
     const author = await User.findByPk(v.authorId, { transaction });
     let superseded: number | null = null;
@@ -278,27 +325,28 @@ export async function withdrawVersion({ actor, slug, version, reason }: { actor:
     await v.update({ status: 'withdrawn', withdrawnAt: new Date(), withdrawnReason: reason.trim() }, { transaction });
     await SignOff.create({ versionId: v.id, userId: actor.id, decision: 'withdrawn', comment: reason.trim(), meaning: MEANING_OF_WITHDRAWAL, contentHash: v.contentHash }, { transaction });
     await appendAuditEvent({ transaction, event: { actorId: actor.id, action: 'version.withdrawn', entityType: 'version', entityId: `${slug}@${version}`, beforeHash: v.contentHash, afterHash: v.contentHash, details: { reason: reason.trim() } } });
-    const affected = await affectedUserIds(v.id, transaction);
+    const uses = await usesOfVersion(v.id, transaction);
+    const affected = peopleToTell(uses);
     const users = affected.length ? await User.findAll({ where: { id: affected, isActive: true }, transaction }) : [];
-    await enqueueMail({ transaction, messages: users.map((u) => ({
-      to: u.email, kind: 'withdrawn', versionId: v.id,
-      subject: `[Correlary] Withdrawn: ${c.title}, version ${version}`,
-      body: `Version ${version} of "${c.title}" (${slug}), content hash ${v.contentHash}, was withdrawn by ${actor.name}.\nReason: ${reason.trim()}\n\nYou evaluated this version through Correlary. Results that depend on it should be reviewed.\n${versionLink(slug, version)}`,
-    })) });
+    await enqueueMail({ transaction, messages: users.map((u) => {
+      const calcs = uses.calculations.filter((k) => k.ownerId === u.id || k.savedBy.includes(u.id));
+      const templates = uses.templates.filter((t) => t.authorId === u.id);
+      const evaluated = uses.evaluations.find((e) => e.userId === u.id);
+      const lines = [
+        ...calcs.map((k) => `- calculation "${k.title}" in project "${k.project}" (now flagged): ${appUrl()}/calculations/${k.id}`),
+        ...templates.map((t) => `- calculation template "${t.title}" version ${t.version} (${t.status.replace('_', ' ')}) pins it: ${appUrl()}/templates/${t.slug}`),
+        ...(evaluated ? [`- ${evaluated.evaluations} evaluation${evaluated.evaluations === 1 ? '' : 's'}${evaluated.viaToken ? ' (some through the API)' : ''}`] : []),
+      ];
+      return {
+        to: u.email, kind: 'withdrawn', versionId: v.id,
+        subject: `[Correlary] Withdrawn: ${c.title}, version ${version}`,
+        body: `Version ${version} of "${c.title}" (${slug}), content hash ${v.contentHash}, was withdrawn by ${actor.name}.\nReason: ${reason.trim()}\n\nYour work that used it:\n${lines.join('\n')}\n\nResults that depend on it should be reviewed.\n${versionLink(slug, version)}`,
+      };
+    }) });
     return { slug, version, status: 'withdrawn' as const, notified: users.map((u) => u.email) };
   });
   await flushMail();
   return outcome;
-}
-
-/** Users whose evaluations (API or browser) touched a version, from the usage records. */
-export async function affectedUserIds(versionId: number, transaction?: Transaction): Promise<number[]> {
-  await flushUsage();
-  const { sequelize } = db();
-  const rows = await sequelize.query<{ user_id: number }>('SELECT DISTINCT user_id FROM usage_records WHERE version_id = ?', {
-    replacements: [versionId], type: QueryTypes.SELECT, transaction,
-  });
-  return rows.map((r) => r.user_id);
 }
 
 export async function addComment({ actor, slug, version, body }: { actor: AuthUser; slug: string; version: number; body: string }) {

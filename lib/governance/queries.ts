@@ -1,5 +1,5 @@
 import { Op, QueryTypes, type WhereOptions } from 'sequelize';
-import { db, type CorrelationVersion, type VersionStatus } from '@/models';
+import { db, type CorrelationVersion, type EntryKind, type VersionStatus } from '@/models';
 import { AppError } from '@/lib/http/errors';
 import type { AuthUser } from '@/lib/auth/users';
 import { userLabels } from '@/lib/auth/labels';
@@ -28,12 +28,12 @@ const SORT_COLUMN: Record<NonNullable<ListQuery['sort']>, string> = { title: 'c.
  * The library list. One SQL query with the latest approved version and the newest version the
  * caller may see, filtered, sorted and paged in the database (fast with thousands of entries).
  */
-export async function listCorrelations({ actor, query }: { actor: AuthUser | null; query: ListQuery }) {
+export async function listCorrelations({ actor, query, kind = 'correlation' }: { actor: AuthUser | null; query: ListQuery; kind?: EntryKind }) {
   const { sequelize } = db();
   const isApprover = actor?.roles.includes('approver') ?? false;
   const visible = `(v.status IN ('approved','superseded','withdrawn') OR v.author_id = :me OR :approver = 1)`;
-  const where: string[] = [`EXISTS (SELECT 1 FROM correlation_versions v WHERE v.correlation_id = c.id AND ${visible})`];
-  const repl: Record<string, unknown> = { me: actor?.id ?? 0, approver: isApprover ? 1 : 0 };
+  const where: string[] = ['c.kind = :kind', `EXISTS (SELECT 1 FROM correlation_versions v WHERE v.correlation_id = c.id AND ${visible})`];
+  const repl: Record<string, unknown> = { me: actor?.id ?? 0, approver: isApprover ? 1 : 0, kind };
   if (query.q) {
     where.push('(c.title LIKE :q OR c.slug LIKE :q OR c.situation LIKE :q OR c.tags LIKE :q)');
     repl.q = `%${query.q.replace(/[%_\\]/g, (m) => `\\${m}`)}%`;
@@ -49,10 +49,10 @@ export async function listCorrelations({ actor, query }: { actor: AuthUser | nul
   const [{ total }] = await sequelize.query<{ total: number }>(`SELECT COUNT(*) AS total FROM correlations c WHERE ${whereSql}`, { replacements: repl, type: QueryTypes.SELECT });
   const rows = await sequelize.query<{
     id: number; slug: string; title: string; category: string; situation: string; tags: string; updated_at: Date;
-    approved_version: number | null; approved_definition: string | null; approved_at: Date | null; latest_version: number; latest_status: VersionStatus;
+    approved_version: number | null; approved_definition: string | null; approved_at: Date | null; approved_hash: string | null; latest_version: number; latest_status: VersionStatus;
   }>(`
     SELECT c.id, c.slug, c.title, c.category, c.situation, c.tags, c.updated_at,
-      a.version AS approved_version, a.definition AS approved_definition, a.approved_at,
+      a.version AS approved_version, a.definition AS approved_definition, a.approved_at, a.content_hash AS approved_hash,
       l.version AS latest_version, l.status AS latest_status
     FROM correlations c
     LEFT JOIN correlation_versions a ON a.correlation_id = c.id AND a.status = 'approved'
@@ -68,8 +68,9 @@ export async function listCorrelations({ actor, query }: { actor: AuthUser | nul
       slug: r.slug, title: r.title, category: r.category, situation: r.situation, tags: JSON.parse(r.tags ?? '[]') as string[],
       latestApprovedVersion: r.approved_version ?? null,
       approvedAt: r.approved_at ?? null,
+      approvedContentHash: r.approved_hash ?? null,
       latestVersion: r.latest_version, latestStatus: r.latest_status,
-      validity: r.approved_definition ? validitySummary(JSON.parse(r.approved_definition) as Definition) : '',
+      validity: r.approved_definition && kind === 'correlation' ? validitySummary(JSON.parse(r.approved_definition) as Definition) : '',
       updatedAt: r.updated_at,
     })),
     total: Number(total), page: query.page, pageSize: query.pageSize,
@@ -92,7 +93,7 @@ export async function getCorrelation({ actor, slug }: { actor: AuthUser | null; 
   const users = await userLabels({ ids: versions.map((v) => v.authorId) });
   const approved = versions.find((v) => v.status === 'approved');
   return {
-    slug: c.slug, title: c.title, category: c.category, situation: c.situation, tags: c.tags,
+    slug: c.slug, kind: c.kind, title: c.title, category: c.category, situation: c.situation, tags: c.tags,
     latestApprovedVersion: approved?.version ?? null,
     versions: versions.map((v) => ({
       version: v.version, status: v.status, contentHash: v.contentHash, author: users.get(v.authorId) ?? '?', authorId: v.authorId,
@@ -133,7 +134,7 @@ export async function getVersionDetail({ actor, slug, version }: { actor: AuthUs
   const names = await userLabels({ ids });
   const definition = v.definition as Definition;
   return {
-    slug, title: correlation.title, version: v.version, status: v.status, contentHash: v.contentHash,
+    slug, kind: correlation.kind, title: correlation.title, version: v.version, status: v.status, contentHash: v.contentHash,
     frozen: v.status !== 'draft', author: names.get(v.authorId) ?? '?', authorId: v.authorId,
     createdAt: v.createdAt, submittedAt: v.submittedAt, approvedAt: v.approvedAt, withdrawnAt: v.withdrawnAt, withdrawnReason: v.withdrawnReason,
     definition, checkCases,

@@ -1,19 +1,19 @@
 import { AppError } from '@/lib/http/errors';
 import type { AuthUser } from '@/lib/auth/users';
-import { compareDefinitions, type Definition } from '@/lib/engine';
+import { compareDefinitions } from '@/lib/engine';
+import { loadVerifiedCorrelation } from '@/lib/evaluation/verified';
 import { boundsOf, typicalValue } from '@/lib/engine/ranges';
-import { previousApproved, resolveVersion } from './queries';
+import { previousApproved } from './queries';
 
 /**
  * Numerical difference of a version from the previously approved one across the validity range of
  * one input (the first bounded one unless chosen), the others held at typical values.
  */
 export async function deviationFromPrevious({ actor, slug, version, sweep, output }: { actor: AuthUser; slug: string; version: number; sweep?: string; output?: string }) {
-  const { version: v } = await resolveVersion({ actor, slug, version });
+  const cur = (await loadVerifiedCorrelation({ actor, slug, version })).compiled.definition;
   const prev = await previousApproved({ slug, before: version });
   if (!prev) return { previous: null, comparison: null, message: 'This is the first version to be approved: there is nothing to compare with.' };
-  const cur = v.definition as Definition;
-  const old = prev.definition as Definition;
+  const old = (await loadVerifiedCorrelation({ actor, slug, version: prev.version })).compiled.definition;
   const common = cur.inputs.map((i) => i.symbol).filter((s) => old.inputs.some((o) => o.symbol === s));
   if (common.length !== cur.inputs.length || common.length !== old.inputs.length) {
     return { previous: prev.version, comparison: null, message: 'The inputs changed between versions, so the two cannot be compared point by point.' };

@@ -18,7 +18,11 @@ export interface Caller {
 export interface AccessRule {
   /** Any one of these roles is enough; omit for "any signed-in user". */
   roles?: Role[];
-  /** Scope a token must carry (sessions have every scope their roles allow). */
+  /**
+   * The scope a token must carry to call this route. A route without one is for people only:
+   * every token is refused (deny by default), so sign-off, withdrawal, token minting, passwords and
+   * user administration can never be done by a script. Sessions have every scope their roles allow.
+   */
   scope?: TokenScope;
   /** Public endpoint: no authentication at all. */
   public?: boolean;
@@ -82,8 +86,9 @@ export function authorize(caller: Caller | null, access: AccessRule): asserts ca
   if (access.roles && !access.roles.some((r) => caller.user.roles.includes(r))) {
     throw new AppError('forbidden:role', `This needs one of the roles: ${access.roles.join(', ')}.`);
   }
-  if (access.scope && caller.scopes && !caller.scopes.includes(access.scope)) {
-    throw new AppError('forbidden:token-scope', `The API token lacks the "${access.scope}" scope.`);
+  if (caller.via === 'token') {
+    if (!access.scope) throw new AppError('forbidden:person-only', 'This action is for a person signed in to Correlary; API tokens cannot do it.');
+    if (!caller.scopes?.includes(access.scope)) throw new AppError('forbidden:token-scope', `The API token lacks the "${access.scope}" scope.`);
   }
 }
 

@@ -1,13 +1,13 @@
 import { route } from '@/lib/http/handler';
 import { AppError } from '@/lib/http/errors';
 import { compareBody } from '@/lib/api/contract';
-import { compareDefinitions, type Definition } from '@/lib/engine';
-import { resolveVersion } from '@/lib/governance/queries';
+import { compareDefinitions } from '@/lib/engine';
+import { loadVerifiedCorrelation } from '@/lib/evaluation/verified';
 
 export const POST = route({ access: { scope: 'read' }, body: compareBody }, async ({ caller, body }) => {
   const items = await Promise.all(body.items.map(async (it) => {
-    const { correlation, version } = await resolveVersion({ actor: caller!.user, slug: it.slug, version: it.version });
-    return { label: `${correlation.title} (v${version.version})`, slug: it.slug, version: version.version, definition: version.definition as Definition };
+    const { version, compiled } = await loadVerifiedCorrelation({ actor: caller!.user, slug: it.slug, version: it.version });
+    return { label: `${version.title} (v${version.version})`, slug: it.slug, version: version.version, definition: compiled.definition };
   }));
   try {
     return compareDefinitions({ items, sweep: body.sweep, output: body.output, fixed: body.fixed, from: body.from, to: body.to, points: body.points });

@@ -6,5 +6,5 @@ import { createCorrelation } from '@/lib/governance/lifecycle';
 export const GET = route({ access: { scope: 'read' }, query: listQuery }, async ({ caller, query }) =>
   listCorrelations({ actor: caller!.user, query }));
 
-export const POST = route({ access: { roles: ['author'], scope: 'read' }, body: createCorrelationBody, maxBody: 5_000_000 }, async ({ caller, body }) =>
+export const POST = route({ access: { roles: ['author'], scope: 'write' }, body: createCorrelationBody, maxBody: 5_000_000 }, async ({ caller, body }) =>
   createCorrelation({ actor: caller!.user, slug: body.slug, definition: body.definition, checkCases: body.checkCases }));

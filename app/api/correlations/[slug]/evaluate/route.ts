@@ -1,6 +1,6 @@
 import { route } from '@/lib/http/handler';
 import { correlationPath, evaluateBody } from '@/lib/api/contract';
-import { evaluateCorrelation } from '@/lib/api/evaluate';
+import { evaluateCorrelation } from '@/lib/evaluation/service';
 import { consumeRateLimit } from '@/lib/api/rate-limit';
 
 export const POST = route({ access: { scope: 'evaluate' }, params: correlationPath, body: evaluateBody, maxBody: 8_000_000 }, async ({ caller, params, body }) => {

@@ -13,5 +13,5 @@ export const GET = route({ access: { scope: 'read' }, params: versionPath }, asy
   return NextResponse.json(detail, { headers: etag ? { ETag: etag, 'Cache-Control': 'private, no-cache' } : { 'Cache-Control': 'no-store' } });
 });
 
-export const PATCH = route({ access: { roles: ['author'], scope: 'read' }, params: versionPath, body: updateDraftBody, maxBody: 5_000_000 }, async ({ caller, params, body }) =>
+export const PATCH = route({ access: { roles: ['author'], scope: 'write' }, params: versionPath, body: updateDraftBody, maxBody: 5_000_000 }, async ({ caller, params, body }) =>
   updateDraft({ actor: caller!.user, slug: params.slug, version: params.n, definition: body.definition, checkCases: body.checkCases }));

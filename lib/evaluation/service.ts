@@ -1,0 +1,134 @@
+import 'server-only';
+import { AppError } from '@/lib/http/errors';
+import type { AuthUser } from '@/lib/auth/users';
+import { EvaluationError, InputError, type InputIssue } from '@/lib/engine/compile';
+import { recordUsage } from '@/lib/api/usage';
+import { loadVerifiedCorrelation, loadVerifiedTemplate, type RunnableChain } from './verified';
+
+export const MAX_ROWS = 10_000;
+/** Field problems listed in one answer: the first ones and a count, never an answer larger than the body. */
+export const MAX_LISTED_ISSUES = 100;
+
+export interface EvaluateRequest {
+  version?: number;
+  inputs?: Record<string, unknown>;
+  rows?: unknown[];
+}
+
+function assertRowCount(rows: unknown[] | undefined) {
+  if (rows && rows.length > MAX_ROWS) {
+    throw new AppError('too_large:rows', `A batch may hold at most ${MAX_ROWS} rows; this one has ${rows.length}. Split it into several requests.`);
+  }
+}
+
+/** Reads every row's inputs into one flat array; all problems, by row and column, in one bounded error. */
+function readRows(rows: unknown[], width: number, read: (row: unknown, path: string) => Float64Array): Float64Array {
+  const flat = new Float64Array(rows.length * width);
+  const issues: InputIssue[] = [];
+  let count = 0;
+  rows.forEach((row, r) => {
+    try {
+      flat.set(read(row, `rows[${r}]`), r * width);
+    } catch (err) {
+      if (!(err instanceof InputError)) throw err;
+      count += err.issues.length;
+      if (issues.length < MAX_LISTED_ISSUES) issues.push(...err.issues.slice(0, MAX_LISTED_ISSUES - issues.length));
+    }
+  });
+  if (count) {
+    throw new AppError('invalid:inputs', `${count} input problem${count === 1 ? '' : 's'}${count > issues.length ? ` (the first ${issues.length} listed)` : ''}, first: ${issues[0].path} ${issues[0].message}`, { issues, count });
+  }
+  return flat;
+}
+
+function refusal(err: unknown): never {
+  if (err instanceof InputError) {
+    throw new AppError('invalid:inputs', `Input problem: ${err.issues.slice(0, 5).map((i) => `${i.path}: ${i.message}`).join('; ')}`, { issues: err.issues.slice(0, MAX_LISTED_ISSUES), count: err.issues.length });
+  }
+  if (err instanceof EvaluationError) {
+    throw new AppError(`invalid:${err.code === 'refused' ? 'refused' : err.code}`, err.message, { symbol: err.symbol, warnings: err.warnings });
+  }
+  throw err;
+}
+
+/**
+ * Evaluates a correlation version (default: the approved one) for one input set or a batch of rows.
+ * Withdrawn versions are served only when pinned, with a warning. Usage is recorded per version.
+ */
+export async function evaluateCorrelation({ actor, tokenId, slug, request }: { actor: AuthUser; tokenId: number | null; slug: string; request: EvaluateRequest }) {
+  assertRowCount(request.rows);
+  const { version: v, compiled: c, notices } = await loadVerifiedCorrelation({ actor, slug, version: request.version });
+  const head = { slug, version: v.version, contentHash: v.contentHash, status: v.status };
+
+  if (request.rows) {
+    const flat = readRows(request.rows, c.inputSymbols.length, c.readInputs);
+    const out = c.runMany(flat, request.rows.length);
+    const m = c.outputSymbols.length;
+    const results = request.rows.map((_, r) => {
+      const err = out.errors.get(r);
+      if (err) return { outputs: null, warnings: err.warnings, error: { code: `refused:${err.code}`, message: err.message } };
+      const outputs: Record<string, number> = {};
+      for (let i = 0; i < m; i++) outputs[c.outputSymbols[i]] = out.outputs[r * m + i];
+      return { outputs, warnings: out.warnings.get(r) ?? [] };
+    });
+    recordUsage({ userId: actor.id, tokenId, versionId: v.id, evaluations: request.rows.length });
+    return { ...head, ...(notices.length ? { warnings: notices } : {}), results };
+  }
+
+  try {
+    const r = c.evaluate(request.inputs ?? {});
+    recordUsage({ userId: actor.id, tokenId, versionId: v.id, evaluations: 1 });
+    return { ...head, outputs: r.outputs, warnings: [...notices, ...r.warnings] };
+  } catch (err) {
+    refusal(err);
+  }
+}
+
+/**
+ * Runs a chain for one input set — with the record of every step — or for a batch of rows
+ * (outputs, warnings and the options picked, per row). Every version used counts as used.
+ */
+export function runChain({ actor, tokenId, runnable, request }: { actor: AuthUser; tokenId: number | null; runnable: RunnableChain; request: EvaluateRequest }) {
+  assertRowCount(request.rows);
+  const { chain, template, notices } = runnable;
+  const head = {
+    slug: template?.slug ?? null, version: template?.version ?? null, contentHash: template?.contentHash ?? null, status: template?.status ?? null,
+    title: template?.title ?? chain.definition.title, units: Object.fromEntries(chain.outputSymbols.map((s) => [s, chain.units.get(s)!])),
+  };
+  const count = request.rows ? request.rows.length : 1;
+  const used = () => {
+    for (const id of runnable.usedVersionIds) recordUsage({ userId: actor.id, tokenId, versionId: id, evaluations: count });
+  };
+
+  if (request.rows) {
+    const flat = readRows(request.rows, chain.inputSymbols.length, chain.readInputs);
+    const out = chain.runMany(flat, count);
+    const m = chain.outputSymbols.length;
+    const choices = chain.definition.steps.flatMap((s) => (s.kind === 'choice' ? [s] : []));
+    const results = request.rows.map((_, r) => {
+      const picked = Object.fromEntries(choices.map((s, k) => [s.key, s.options[out.picks[k][r]]?.label ?? null]));
+      const err = out.errors.get(r);
+      if (err) return { outputs: null, warnings: err.warnings, picked, error: { code: `refused:${err.code}`, message: err.message } };
+      const outputs: Record<string, number> = {};
+      for (let i = 0; i < m; i++) outputs[chain.outputSymbols[i]] = out.outputs[r * m + i];
+      return { outputs, warnings: out.warnings.get(r) ?? [], picked };
+    });
+    used();
+    return { ...head, ...(notices.length ? { warnings: notices } : {}), results };
+  }
+
+  try {
+    const r = chain.runDetailed(chain.readInputs(request.inputs ?? {}, 'inputs'));
+    used();
+    return { ...head, steps: r.steps, outputs: r.outputs, warnings: [...notices, ...r.warnings] };
+  } catch (err) {
+    refusal(err);
+  }
+}
+
+/** Runs a calculation template (default: its approved version). */
+export async function runTemplate({ actor, tokenId, slug, request }: { actor: AuthUser; tokenId: number | null; slug: string; request: EvaluateRequest }) {
+  assertRowCount(request.rows);
+  const runnable = await loadVerifiedTemplate({ actor, slug, version: request.version });
+  return runChain({ actor, tokenId, runnable, request });
+}
