@@ -6,7 +6,7 @@ const config: Config = {
   theme: {
     extend: {
       colors: {
-        ink: { DEFAULT: '#1d2630', soft: '#4a5866', faint: '#8795a3' },
+        ink: { DEFAULT: '#1d2630', soft: '#4a5866', faint: '#5f6b78' },
         paper: { DEFAULT: '#faf8f4', raised: '#ffffff', sunk: '#f1ede5' },
         line: '#ddd6c9',
         brand: { DEFAULT: '#0f5f66', dark: '#0a464b', light: '#d9ecec' },

@@ -9,6 +9,8 @@ export const dynamic = 'force-dynamic';
 const NAV: NavItem[] = [
   { href: '/library', label: 'Library' },
   { href: '/compare', label: 'Compare' },
+  { href: '/projects', label: 'Calculations' },
+  { href: '/templates', label: 'Templates' },
   { href: '/author', label: 'My drafts', roles: ['author'] },
   { href: '/review', label: 'Review queue', roles: ['approver'] },
   { href: '/api-reference', label: 'API' },

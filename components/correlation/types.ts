@@ -2,7 +2,7 @@ import type { Definition, CheckCase } from '@/lib/engine/types';
 import type { ValidationReport } from '@/lib/engine/validate';
 
 export interface VersionDetail {
-  slug: string; title: string; version: number; status: string; contentHash: string | null; frozen: boolean;
+  slug: string; kind?: 'correlation' | 'template'; title: string; version: number; status: string; contentHash: string | null; frozen: boolean;
   author: string; authorId: number; createdAt: string; submittedAt: string | null; approvedAt: string | null;
   withdrawnAt: string | null; withdrawnReason: string | null;
   definition: Definition; checkCases: CheckCase[]; validation: ValidationReport | null; tex: Record<string, string>;

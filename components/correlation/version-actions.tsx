@@ -2,10 +2,31 @@
 
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { api, ApiError } from '@/lib/client/api';
 import type { VersionDetail, Viewer } from './types';
+
+interface Uses {
+  calculations: { id: number; title: string; project: string }[];
+  templates: { slug: string; title: string; version: number; status: string }[];
+  evaluations: { name: string; evaluations: number; viaToken: boolean }[];
+}
+
+/** "What uses this version", shown before a withdrawal is confirmed. */
+function UsesSummary({ uses, loading }: { uses?: Uses; loading: boolean }) {
+  if (loading || !uses) return <p className="text-sm text-ink-soft" role="status">Looking up what uses this version…</p>;
+  const none = !uses.calculations.length && !uses.templates.length && !uses.evaluations.length;
+  return (
+    <div className="space-y-1 text-sm" data-testid="version-uses">
+      <p className="font-medium">What uses this version</p>
+      {none && <p>Nothing yet: no saved calculation, template or evaluation.</p>}
+      {uses.calculations.length > 0 && <div><p>{uses.calculations.length} saved calculation{uses.calculations.length === 1 ? '' : 's'} (they will be flagged):</p><ul className="list-disc pl-5">{uses.calculations.map((c) => <li key={c.id}><Link className="underline" href={`/calculations/${c.id}`}>{c.title}</Link> — {c.project}</li>)}</ul></div>}
+      {uses.templates.length > 0 && <div><p>{uses.templates.length} calculation template version{uses.templates.length === 1 ? '' : 's'} pin it:</p><ul className="list-disc pl-5">{uses.templates.map((t) => <li key={`${t.slug}${t.version}`}>{t.title} v{t.version} ({t.status.replace('_', ' ')})</li>)}</ul></div>}
+      {uses.evaluations.length > 0 && <p>Evaluated by {uses.evaluations.map((e) => `${e.name} (${e.evaluations}${e.viaToken ? ', API' : ''})`).join(', ')}.</p>}
+    </div>
+  );
+}
 
 export function VersionActions({ detail, user }: { detail: VersionDetail; user: Viewer }) {
   const router = useRouter();
@@ -22,6 +43,7 @@ export function VersionActions({ detail, user }: { detail: VersionDetail; user: 
     mutationFn: () => api(`/api/correlations/${detail.slug}/versions/${detail.version}/withdraw`, { body: { reason } }),
     onSuccess: () => { setOpen(false); qc.invalidateQueries({ queryKey: ['version', detail.slug] }); qc.invalidateQueries({ queryKey: ['correlation', detail.slug] }); },
   });
+  const uses = useQuery({ queryKey: ['uses', detail.slug, detail.version], enabled: open, queryFn: () => api<Uses>(`/api/correlations/${detail.slug}/versions/${detail.version}/uses`) });
   const reasonError = withdraw.error instanceof ApiError ? withdraw.error.fieldErrors().reason : undefined;
 
   return (
@@ -33,6 +55,7 @@ export function VersionActions({ detail, user }: { detail: VersionDetail; user: 
       {newVersion.isError && <p role="alert" className="text-sm text-danger">{newVersion.error.message}</p>}
       {open && (
         <form className="w-full max-w-xl space-y-2 rounded border border-danger/30 bg-danger-bg p-3" onSubmit={(e) => { e.preventDefault(); withdraw.mutate(); }}>
+          <UsesSummary uses={uses.data} loading={uses.isPending} />
           <label htmlFor="withdraw-reason" className="block text-sm font-medium">Reason for withdrawal (sent to everyone who used this version)</label>
           <textarea id="withdraw-reason" className="field-input" rows={3} value={reason} aria-invalid={Boolean(reasonError)} onChange={(e) => setReason(e.target.value)} />
           {(reasonError || (withdraw.isError && !reasonError)) && <p className="text-xs text-danger">{reasonError ?? withdraw.error?.message}</p>}

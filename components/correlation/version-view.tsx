@@ -15,6 +15,8 @@ import { SweepChart } from './sweep-chart';
 import { ScriptSnippets } from './script-snippets';
 import { VersionActions } from './version-actions';
 import { ValidationReportView } from './validation-report';
+import { ChainOutline } from '@/components/calculation/chain-outline';
+import type { TemplateDefinition } from '@/lib/engine/template-types';
 import type { CorrelationSummary, VersionDetail, Viewer } from './types';
 
 function fmtLimit(min?: number, max?: number, minInc = true, maxInc = true) {
@@ -54,6 +56,12 @@ export function VersionView({ slug, version, user }: { slug: string; version: nu
               <VersionActions detail={v} user={user} />
             </header>
 
+            {v.kind === 'template' ? (
+              <>
+                <p className="text-sm">A calculation template: <Link className="text-brand-dark underline" href={`/templates/${slug}?version=${v.version}`}>run it or start a calculation from it</Link>.</p>
+                <ChainOutline definition={v.definition as unknown as TemplateDefinition} />
+              </>
+            ) : (<>
             <section className="panel space-y-2" aria-label="Equations">
               <h2 className="font-semibold">Equations</h2>
               {(d.steps ?? []).filter((s) => s.kind !== 'table').map((s) => v.tex[s.symbol] && <div key={s.symbol} className="text-ink-soft"><Tex tex={v.tex[s.symbol]} display /></div>)}
@@ -119,6 +127,7 @@ export function VersionView({ slug, version, user }: { slug: string; version: nu
 
             <SweepChart detail={v} />
             <ScriptSnippets slug={slug} detail={v} />
+            </>)}
             <ValidationReportView report={v.validation} checkCases={v.checkCases} />
 
             <section className="panel" aria-label="Versions and sign-offs">

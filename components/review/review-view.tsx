@@ -14,6 +14,8 @@ import type { VersionDetail } from '@/components/correlation/types';
 import type { Comparison } from '@/lib/engine/compare';
 import { formatNumber } from '@/lib/client/units';
 import { DefinitionDiff } from './definition-diff';
+import { ChainOutline } from '@/components/calculation/chain-outline';
+import type { TemplateDefinition } from '@/lib/engine/template-types';
 
 const MEANING = 'I reviewed the definition, references and validation report; approved for use.';
 
@@ -21,7 +23,8 @@ interface Deviation { previous: number | null; fixed?: Record<string, number>; c
 
 export function ReviewView({ slug, version, userId }: { slug: string; version: number; userId: number }) {
   const detail = useQuery({ queryKey: ['version', slug, version], queryFn: () => api<VersionDetail>(`/api/correlations/${slug}/versions/${version}`) });
-  const deviation = useQuery({ queryKey: ['deviation', slug, version], queryFn: () => api<Deviation>(`/api/correlations/${slug}/versions/${version}/deviation`) });
+  const isTemplate = detail.data?.kind === 'template';
+  const deviation = useQuery({ queryKey: ['deviation', slug, version], enabled: detail.data !== undefined && !isTemplate, queryFn: () => api<Deviation>(`/api/correlations/${slug}/versions/${version}/deviation`) });
   const previous = useQuery({
     queryKey: ['version', slug, deviation.data?.previous], enabled: Boolean(deviation.data?.previous),
     queryFn: () => api<VersionDetail>(`/api/correlations/${slug}/versions/${deviation.data!.previous}`),
@@ -37,6 +40,14 @@ export function ReviewView({ slug, version, userId }: { slug: string; version: n
             <Link href={`/correlations/${slug}/versions/${version}`} className="ml-auto text-sm text-brand-dark underline">Open the full version page</Link>
           </header>
 
+          {v.kind === 'template' && (
+            <section className="space-y-2" aria-label="The chain under review">
+              <h2 className="font-semibold">The chain under review</h2>
+              <p className="text-sm text-ink-soft">Every pinned correlation version, binding and rule below is what you sign; the validation report shows the template's own check cases run through the whole chain.</p>
+              <ChainOutline definition={v.definition as unknown as TemplateDefinition} />
+            </section>
+          )}
+          {v.kind !== 'template' && <>
           <section className="panel space-y-2" aria-label="Differences">
             <h2 className="font-semibold">Definition against the previous approved version</h2>
             {deviation.data && !deviation.data.previous && <p className="text-sm text-ink-soft">{deviation.data.message}</p>}
@@ -61,6 +72,7 @@ export function ReviewView({ slug, version, userId }: { slug: string; version: n
               )}
             </QueryState>
           </section>
+          </>}
 
           <ValidationReportView report={v.validation} checkCases={v.checkCases} />
           {v.comments.length > 0 && <section className="panel"><h2 className="font-semibold">Comments</h2><ul className="text-sm">{v.comments.map((c, k) => <li key={k}>{c.by}: {c.body}</li>)}</ul></section>}

@@ -80,14 +80,16 @@ export async function flaggedCalculations(calculationIds: number[]): Promise<Map
 export async function listProjects({ actor }: { actor: AuthUser }) {
   const { Project, ProjectMember, Calculation } = db();
   const wide = actor.roles.includes('admin') || actor.roles.includes('approver');
-  const memberOf = (await ProjectMember.findAll({ where: { userId: actor.id } })).map((m) => m.projectId);
+  const memberships = await ProjectMember.findAll({ where: { userId: actor.id } });
+  const memberOf = memberships.map((m) => m.projectId);
   const projects = await Project.findAll({ where: wide ? {} : { [Op.or]: [{ ownerId: actor.id }, { id: memberOf }] }, order: [['updatedAt', 'DESC']], limit: 200 });
   const calcs = projects.length ? await Calculation.findAll({ where: { projectId: projects.map((p) => p.id) }, attributes: ['id', 'projectId'] }) : [];
   const flags = await flaggedCalculations(calcs.map((c) => c.id));
   const owners = await userLabels({ ids: projects.map((p) => p.ownerId) });
   return projects.map((p) => {
     const mine = calcs.filter((c) => c.projectId === p.id);
-    return { id: p.id, name: p.name, description: p.description, owner: owners.get(p.ownerId) ?? '?', calculations: mine.length, flagged: mine.filter((c) => flags.has(c.id)).length, updatedAt: p.updatedAt };
+    const canEdit = p.ownerId === actor.id || memberships.some((m) => m.projectId === p.id && m.role === 'editor');
+    return { id: p.id, name: p.name, description: p.description, owner: owners.get(p.ownerId) ?? '?', canEdit, calculations: mine.length, flagged: mine.filter((c) => flags.has(c.id)).length, updatedAt: p.updatedAt };
   });
 }
 
