@@ -8,7 +8,7 @@ import { QueryState } from '@/components/ui/query-state';
 import { Caution } from '@/components/ui/caution';
 import { CopyButton } from '@/components/ui/copy-button';
 import type { TemplateDefinition } from '@/lib/engine/template-types';
-import { ResultsTable, StepChain } from './step-chain';
+import { chainNotices, ResultsTable, StepChain } from './step-chain';
 import { Sym } from './symbol';
 import type { RunAnswer } from './types';
 
@@ -54,7 +54,7 @@ export function CalculationView({ id, revision, justSaved }: { id: number; revis
         const a = content.answer;
         const names = Object.fromEntries(content.chain.outputs.map((o) => [o.symbol, o.name]));
         const warnCount = a.warnings?.length ?? 0;
-        const notices = (a.warnings ?? []).filter((w) => !(a.steps ?? []).some((s) => s.warnings.some((x) => x.message === w.message && x.step === w.step)));
+        const notices = chainNotices(a.warnings, a.steps);
         const rows = content.request.rows;
         return (
           <div className="space-y-4">

@@ -36,7 +36,10 @@ export function ParametricRun({ slug, version, definition, example }: { slug: st
   const results = run.data?.results ?? [];
   const rows = table?.rows ?? [];
   const numeric = (v: unknown) => (typeof v === 'number' ? v : (v as { value: number } | undefined)?.value ?? NaN);
-  const points = useMemo(() => results.map((r, i) => ({ x: numeric(rows[i]?.[x]), y: r.outputs?.[y] ?? null, warned: r.warnings.length > 0 })).filter((p) => Number.isFinite(p.x)).sort((a, b) => a.x - b.x), [results, rows, x, y]);
+  // Plot against what varies: the chosen input, or else the first input that is not the same in every row.
+  const varying = definition.inputs.map((i) => i.symbol).filter((s) => new Set(rows.map((r) => numeric(r[s]))).size > 1);
+  const xs = varying.includes(x) || varying.length === 0 ? x : varying[0];
+  const points = useMemo(() => results.map((r, i) => ({ x: numeric(rows[i]?.[xs]), y: r.outputs?.[y] ?? null, warned: r.warnings.length > 0 })).filter((p) => Number.isFinite(p.x)).sort((a, b) => a.x - b.x), [results, rows, xs, y]);
   const serverIssues = run.error instanceof ApiError ? run.error.details?.issues ?? [] : [];
   const warnedRows = results.filter((r) => r.warnings.length || r.error).length;
 
@@ -86,12 +89,12 @@ export function ParametricRun({ slug, version, definition, example }: { slug: st
             </div>
             <div className="flex flex-wrap gap-3 text-sm">
               <label>plot <select className="field-input inline-block w-auto" value={y} onChange={(e) => setY(e.target.value)} aria-label="output to plot">{definition.outputs.map((o) => <option key={o.symbol} value={o.symbol}>{o.symbol}</option>)}</select></label>
-              <label>against <select className="field-input inline-block w-auto" value={x} onChange={(e) => setX(e.target.value)} aria-label="input on the horizontal axis">{definition.inputs.map((i) => <option key={i.symbol} value={i.symbol}>{i.symbol}</option>)}</select></label>
+              <label>against <select className="field-input inline-block w-auto" value={xs} onChange={(e) => setX(e.target.value)} aria-label="input on the horizontal axis">{definition.inputs.map((i) => <option key={i.symbol} value={i.symbol}>{i.symbol}</option>)}</select></label>
             </div>
             <figure>
               <SeriesChart series={[{ label: `${y} [${run.data.units[y]}]`, points: points.map((p) => ({ x: p.x, y: p.y })) }]} points={points.filter((p) => p.warned && p.y !== null).map((p) => ({ x: p.x, y: p.y!, label: 'range warning' }))}
-                xLabel={x} yLabel={`${y} [${run.data.units[y]}]`} logX={false} height={280} />
-              <figcaption className="text-xs text-ink-soft">{y} against {x} for every case; marked points carry a range warning. The table below holds the same values.</figcaption>
+                xLabel={xs} yLabel={`${y} [${run.data.units[y]}]`} logX={false} height={280} />
+              <figcaption className="text-xs text-ink-soft">{y} against {xs} for every case; marked points carry a range warning. The table below holds the same values.</figcaption>
             </figure>
             <div className="max-h-96 overflow-auto">
               <table className="table-plain" aria-label="Case results">
@@ -102,7 +105,7 @@ export function ParametricRun({ slug, version, definition, example }: { slug: st
                       <td>{i + 1}</td>
                       {definition.inputs.map((inp) => { const v = rows[i]?.[inp.symbol]; return <td key={inp.symbol} className="font-mono">{typeof v === 'number' ? formatNumber(v, 6) : `${v?.value} ${v?.unit}`}</td>; })}
                       {definition.outputs.map((o) => <td key={o.symbol} className="font-mono">{formatNumber(r.outputs?.[o.symbol], 5)}</td>)}
-                      <td className="text-xs">{Object.values(r.picked).join(', ')}</td>
+                      <td className="text-xs">{Object.entries(r.picked).map(([k, v]) => `${k}: ${v}`).join('; ')}</td>
                       <td className="text-xs text-caution">{r.error?.message ?? r.warnings.map((w) => `${w.step}: ${w.symbol}`).join('; ')}</td>
                     </tr>
                   ))}

@@ -14,6 +14,12 @@ function Warnings({ warnings }: { warnings: ChainWarningView[] }) {
   );
 }
 
+/** Warnings of a run that belong to no step's own list: limits on the inputs, template or pinned-version status. */
+export function chainNotices(warnings: ChainWarningView[] | undefined, steps: StepRecordView[] | undefined): ChainWarningView[] {
+  const own = new Set((steps ?? []).flatMap((s) => s.warnings.map((w) => `${w.step}\u0000${w.symbol}\u0000${w.message}`)));
+  return (warnings ?? []).filter((w) => !own.has(`${w.step}\u0000${w.symbol}\u0000${w.message}`));
+}
+
 /**
  * The chain as it ran: one numbered card per executed step with what it took (in the units it takes
  * them), what it gave, the pinned version and any range warning right where it arose. Choices show

@@ -10,7 +10,7 @@ import { Caution } from '@/components/ui/caution';
 import { TabList } from '@/components/ui/tab-list';
 import type { TemplateDefinition } from '@/lib/engine/template-types';
 import { InputForm, initialInputs, readForm, type InputState } from './input-form';
-import { ResultsTable, StepChain } from './step-chain';
+import { chainNotices, ResultsTable, StepChain } from './step-chain';
 import { SavePanel } from './save-panel';
 import { ParametricRun } from './parametric';
 import { ChainOutline } from './chain-outline';
@@ -56,7 +56,7 @@ function Workspace({ detail }: { detail: Detail }) {
     if (!Object.keys(errs).length) { setLastInputs(inputs); run.mutate(inputs); }
   }
   const names = Object.fromEntries(def.outputs.map((o) => [o.symbol, o.name]));
-  const notices = (run.data?.warnings ?? []).filter((w) => !(run.data?.steps ?? []).some((s) => s.warnings.includes(w)));
+  const notices = chainNotices(run.data?.warnings, run.data?.steps);
   const warnCount = run.data?.warnings?.length ?? 0;
 
   return (

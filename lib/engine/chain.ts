@@ -215,7 +215,8 @@ export function compileChain(def: TemplateDefinition, resolve: Resolve): Compile
     const key = step.key;
     return {
       key, title: step.title, kind: 'expression', pin: null,
-      reads: [...reads].map(([name, slot]) => ({ name, slot, unit: units.get(name)!, a: 1, b: 0 })), writes,
+      // What the step takes from before it; a value it computes itself (h in q = h·A·ΔT) is not an input.
+      reads: [...reads].filter(([name]) => !writes.some((w) => w.symbol === name)).map(([name, slot]) => ({ name, slot, unit: units.get(name)!, a: 1, b: 0 })), writes,
       run(v, sink) {
         const bad = body(v, FUNCTION_IMPLS);
         if (bad !== null) throw new EvaluationError('not-finite', `step "${key}": ${bad} cannot be computed for these inputs (the formula gives ${v[slots.get(bad)!]})`, bad, sink ?? []);
