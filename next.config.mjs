@@ -5,5 +5,25 @@ const nextConfig = {
   poweredByHeader: false,
   typescript: { ignoreBuildErrors: false },
   experimental: { turbopackFileSystemCacheForBuild: false },
+  // Security headers on every answer. Everything is served from the app itself (fonts, KaTeX, the
+  // Monaco editor and its workers); Next.js's hydration needs inline scripts, KaTeX and Monaco inline styles.
+  async headers() {
+    const dev = process.env.NODE_ENV === 'development';
+    const csp = [
+      "default-src 'self'", `script-src 'self' 'unsafe-inline'${dev ? " 'unsafe-eval'" : ''}`, "style-src 'self' 'unsafe-inline'",
+      "img-src 'self' data: blob:", "font-src 'self' data:", `connect-src 'self'${dev ? ' ws:' : ''}`, "worker-src 'self' blob:",
+      "frame-ancestors 'none'", "base-uri 'self'", "form-action 'self'", "object-src 'none'",
+    ].join('; ');
+    return [{
+      source: '/:path*',
+      headers: [
+        { key: 'Content-Security-Policy', value: csp },
+        { key: 'X-Frame-Options', value: 'DENY' },
+        { key: 'X-Content-Type-Options', value: 'nosniff' },
+        { key: 'Referrer-Policy', value: 'same-origin' },
+        { key: 'Permissions-Policy', value: 'camera=(), microphone=(), geolocation=()' },
+      ],
+    }];
+  },
 };
 export default nextConfig;

@@ -1,4 +1,4 @@
-import { DataTypes, type QueryInterface } from 'sequelize';
+import { DataTypes, QueryTypes, type QueryInterface } from 'sequelize';
 
 export const name = '20261202000100-templates-projects-calculations';
 
@@ -74,6 +74,7 @@ export async function down(qi: QueryInterface): Promise<void> {
   for (const table of ['calculation_uses', 'calculation_revisions', 'calculations', 'project_members', 'projects', 'template_dependencies']) {
     await qi.dropTable(table);
   }
-  await qi.removeIndex('correlations', ['kind']);
-  await qi.removeColumn('correlations', 'kind');
+  // queryInterface.removeColumn issues an untyped raw query, which the mariadb connector rejects; the
+  // typed statement drops the column and its index.
+  await qi.sequelize.query('ALTER TABLE correlations DROP COLUMN kind', { type: QueryTypes.BULKDELETE });
 }

@@ -55,7 +55,7 @@ function errorResponse(err: unknown): Response {
   if (err instanceof AppError) {
     const status = statusOf(err.code);
     const body = { error: { code: err.code, message: err.message, ...(err.details !== undefined ? { details: err.details } : {}) } };
-    return NextResponse.json(body, { status: status === 500 ? 400 : status, headers: err.headers });
+    return NextResponse.json(body, { status: status === 500 ? 400 : status, headers: { 'cache-control': 'no-store', ...err.headers } });
   }
   // A unique index caught a race the service's own check could not see (two requests at once).
   if (err instanceof Error && err.name === 'SequelizeUniqueConstraintError') {
@@ -83,12 +83,12 @@ async function identify(req: NextRequest): Promise<Caller | null> {
 
 export function authorize(caller: Caller | null, access: AccessRule): asserts caller is Caller {
   if (!caller) throw new AppError('unauthenticated:required', 'Sign in or send an API token (Authorization: Bearer …).');
-  if (access.roles && !access.roles.some((r) => caller.user.roles.includes(r))) {
-    throw new AppError('forbidden:role', `This needs one of the roles: ${access.roles.join(', ')}.`);
-  }
   if (caller.via === 'token') {
     if (!access.scope) throw new AppError('forbidden:person-only', 'This action is for a person signed in to Correlary; API tokens cannot do it.');
     if (!caller.scopes?.includes(access.scope)) throw new AppError('forbidden:token-scope', `The API token lacks the "${access.scope}" scope.`);
+  }
+  if (access.roles && !access.roles.some((r) => caller.user.roles.includes(r))) {
+    throw new AppError('forbidden:role', `This needs one of the roles: ${access.roles.join(', ')}.`);
   }
 }
 
@@ -105,13 +105,37 @@ async function readBody(req: NextRequest, maxBody: number): Promise<unknown> {
   }
 }
 
+/** Field problems listed in one error answer; beyond that only their count (an answer never outgrows its question). */
+export const MAX_LISTED_ISSUES = 50;
+
 function parseWith<T>(schema: ZodType<T>, value: unknown, what: string): T {
   const result = schema.safeParse(value);
   if (!result.success) {
-    const issues = zodIssues(result.error);
-    throw new AppError(`invalid:${what}`, `The ${what} is not valid: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`, { issues });
+    const all = zodIssues(result.error);
+    const issues = all.slice(0, MAX_LISTED_ISSUES).map((i) => ({ path: i.path.slice(0, 200), message: i.message.slice(0, 300) }));
+    const shown = issues.slice(0, 5).map((i) => `${i.path}: ${i.message}`).join('; ');
+    throw new AppError(`invalid:${what}`, `The ${what} is not valid: ${shown}${all.length > 5 ? ` (and ${all.length - 5} more)` : ''}`, { issues, count: all.length });
   }
   return result.data;
+}
+
+const SAFE_METHODS = ['GET', 'HEAD', 'OPTIONS'];
+
+/**
+ * Cross-site request forgery: a state-changing request made with a session cookie must come from
+ * the app's own pages — same Origin (or Referer) — and, when it carries a body, as JSON (a plain
+ * HTML form or a text/plain fetch from another site can do neither). Token requests carry no
+ * ambient credentials and are exempt.
+ */
+function assertSameOrigin(req: NextRequest, hasBody: boolean) {
+  if (SAFE_METHODS.includes(req.method)) return;
+  const allowed = new Set([req.nextUrl.origin]);
+  if (process.env.NEXTAUTH_URL) { try { allowed.add(new URL(process.env.NEXTAUTH_URL).origin); } catch { /* a malformed setting allows nothing more */ } }
+  const origin = req.headers.get('origin') ?? (() => { try { return new URL(req.headers.get('referer') ?? '').origin; } catch { return null; } })();
+  if (!origin || !allowed.has(origin)) throw new AppError('forbidden:cross-origin', 'This request did not come from Correlary\'s own pages; signed-in changes are accepted from the app itself only.');
+  if (hasBody && !/^application\/json\b/i.test(req.headers.get('content-type') ?? '')) {
+    throw new AppError('bad_request:content-type', 'Send the body as JSON (Content-Type: application/json).');
+  }
 }
 
 /** One wrapper for every route handler: parse → authenticate → authorize → act → respond. */
@@ -120,13 +144,19 @@ export function route<Q = undefined, B = undefined, P = undefined>(spec: Spec<Q,
     try {
       const caller = spec.access.public ? null : await identify(req);
       if (!spec.access.public) authorize(caller, spec.access);
+      if (caller?.via === 'session') assertSameOrigin(req, Boolean(spec.body));
       const params = spec.params ? parseWith(spec.params, await context.params, 'path') : (undefined as P);
       const query = spec.query
         ? parseWith(spec.query, Object.fromEntries(req.nextUrl.searchParams.entries()), 'query')
         : (undefined as Q);
       const body = spec.body ? parseWith(spec.body, await readBody(req, spec.maxBody ?? 1_000_000), 'body') : (undefined as B);
       const result = await handler({ req, caller, query, body, params });
-      return result instanceof Response ? result : NextResponse.json(result);
+      // Answers carry the caller's data (tokens, users, drafts): no shared cache keeps them unless a route says so.
+      if (result instanceof Response) {
+        if (!result.headers.has('cache-control')) result.headers.set('cache-control', 'no-store');
+        return result;
+      }
+      return NextResponse.json(result, { headers: { 'cache-control': 'no-store' } });
     } catch (err) {
       return errorResponse(err);
     }

@@ -11,7 +11,8 @@ export interface Answer<T = any> {
 export async function call<T = any>(path: string, init: { method?: string; body?: unknown; rawBody?: string; token?: string; cookie?: string; headers?: Record<string, string> } = {}): Promise<Answer<T>> {
   const headers: Record<string, string> = { ...init.headers };
   if (init.token) headers.authorization = `Bearer ${init.token}`;
-  if (init.cookie) headers.cookie = init.cookie;
+  // A browser sends its page's Origin with every state-changing request; tests with a session do too.
+  if (init.cookie) { headers.cookie = init.cookie; headers.origin ??= BASE; }
   if (init.body !== undefined || init.rawBody !== undefined) headers['content-type'] = 'application/json';
   const res = await fetch(BASE + path, {
     method: init.method ?? (init.body !== undefined || init.rawBody !== undefined ? 'POST' : 'GET'),
