@@ -5,8 +5,8 @@ import { z, type ZodType } from 'zod';
 import { authOptions } from '@/lib/auth/options';
 import { findUserById, type AuthUser } from '@/lib/auth/users';
 import { resolveApiToken, type TokenScope } from '@/lib/api/tokens';
-import type { Role } from '@/models';
 import { AppError, statusOf } from './errors';
+import { ACCESS, type AccessRule, type RouteKey } from './access';
 
 export interface Caller {
   user: AuthUser;
@@ -15,21 +15,7 @@ export interface Caller {
   scopes: TokenScope[] | null;
 }
 
-export interface AccessRule {
-  /** Any one of these roles is enough; omit for "any signed-in user". */
-  roles?: Role[];
-  /**
-   * The scope a token must carry to call this route. A route without one is for people only:
-   * every token is refused (deny by default), so sign-off, withdrawal, token minting, passwords and
-   * user administration can never be done by a script. Sessions have every scope their roles allow.
-   */
-  scope?: TokenScope;
-  /** Public endpoint: no authentication at all. */
-  public?: boolean;
-}
-
 interface Spec<Q, B, P> {
-  access: AccessRule;
   query?: ZodType<Q>;
   body?: ZodType<B>;
   params?: ZodType<P>;
@@ -138,13 +124,17 @@ function assertSameOrigin(req: NextRequest, hasBody: boolean) {
   }
 }
 
-/** One wrapper for every route handler: parse → authenticate → authorize → act → respond. */
-export function route<Q = undefined, B = undefined, P = undefined>(spec: Spec<Q, B, P>, handler: Handler<Q, B, P>) {
+/**
+ * One wrapper for every handler: parse → authenticate → authorize → act → respond. Who may call the
+ * route is its row in the access table (lib/http/access.ts), named by `key` ("POST /api/…").
+ */
+export function route<Q = undefined, B = undefined, P = undefined>(key: RouteKey, spec: Spec<Q, B, P>, handler: Handler<Q, B, P>) {
+  const access: AccessRule = ACCESS[key];
   return async (req: NextRequest, context: { params: Promise<Record<string, string>> }) => {
     try {
-      const caller = spec.access.public ? null : await identify(req);
-      if (!spec.access.public) authorize(caller, spec.access);
-      if (caller?.via === 'session') assertSameOrigin(req, Boolean(spec.body));
+      const caller = await identify(req);
+      authorize(caller, access);
+      if (caller.via === 'session') assertSameOrigin(req, Boolean(spec.body));
       const params = spec.params ? parseWith(spec.params, await context.params, 'path') : (undefined as P);
       const query = spec.query
         ? parseWith(spec.query, Object.fromEntries(req.nextUrl.searchParams.entries()), 'query')

@@ -4,7 +4,7 @@ import { compareBody } from '@/lib/api/contract';
 import { compareDefinitions } from '@/lib/engine';
 import { loadVerifiedCorrelation } from '@/lib/evaluation/verified';
 
-export const POST = route({ access: { scope: 'read' }, body: compareBody }, async ({ caller, body }) => {
+export const POST = route('POST /api/compare', { body: compareBody }, async ({ caller, body }) => {
   const items = await Promise.all(body.items.map(async (it) => {
     const { version, compiled } = await loadVerifiedCorrelation({ actor: caller!.user, slug: it.slug, version: it.version });
     return { label: `${version.title} (v${version.version})`, slug: it.slug, version: version.version, definition: compiled.definition };

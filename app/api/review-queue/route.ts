@@ -1,4 +1,4 @@
 import { route } from '@/lib/http/handler';
 import { reviewQueue } from '@/lib/governance/queries';
 
-export const GET = route({ access: { roles: ['approver'] } }, async ({ caller }) => ({ items: await reviewQueue({ actor: caller!.user }) }));
+export const GET = route('GET /api/review-queue', {}, async ({ caller }) => ({ items: await reviewQueue({ actor: caller!.user }) }));

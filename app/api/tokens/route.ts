@@ -4,14 +4,13 @@ import { findUserById } from '@/lib/auth/users';
 import { createApiToken, listApiTokens } from '@/lib/api/tokens';
 import { createTokenBody, listTokensQuery } from './schema';
 
-export const GET = route({ access: {}, query: listTokensQuery }, async ({ caller, query }) => {
+export const GET = route('GET /api/tokens', { query: listTokensQuery }, async ({ caller, query }) => {
   const isAdmin = caller!.user.roles.includes('admin');
   if (query.all === '1' && !isAdmin) throw new AppError('forbidden:role', 'Only admins can list every token.');
   return { items: await listApiTokens({ userId: query.all === '1' ? undefined : caller!.user.id }) };
 });
 
-export const POST = route({ access: {}, body: createTokenBody }, async ({ caller, body }) => {
-  if (caller!.via !== 'session') throw new AppError('forbidden:session-only', 'Create API tokens from a signed-in browser session.');
+export const POST = route('POST /api/tokens', { body: createTokenBody }, async ({ caller, body }) => {
   const userId = body.userId ?? caller!.user.id;
   if (userId !== caller!.user.id && !caller!.user.roles.includes('admin')) {
     throw new AppError('forbidden:role', 'Only admins can create tokens for other users.');

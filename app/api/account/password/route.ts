@@ -8,7 +8,7 @@ const body = z.object({
   newPassword: passwordSchema,
 }).strict();
 
-export const POST = route({ access: {}, body }, async ({ caller, body }) => {
+export const POST = route('POST /api/account/password', { body }, async ({ caller, body }) => {
   if (caller!.via !== 'session') {
     throw new AppError('forbidden:session-only', 'Passwords can only be changed from a signed-in browser session.');
   }

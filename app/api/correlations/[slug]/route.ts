@@ -2,5 +2,5 @@ import { route } from '@/lib/http/handler';
 import { correlationPath } from '@/lib/api/contract';
 import { getCorrelation } from '@/lib/governance/queries';
 
-export const GET = route({ access: { scope: 'read' }, params: correlationPath }, async ({ caller, params }) =>
+export const GET = route('GET /api/correlations/{slug}', { params: correlationPath }, async ({ caller, params }) =>
   getCorrelation({ actor: caller!.user, slug: params.slug }));

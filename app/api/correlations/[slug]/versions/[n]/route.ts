@@ -5,7 +5,7 @@ import { getVersionDetail } from '@/lib/governance/queries';
 import { updateDraft } from '@/lib/governance/lifecycle';
 
 /** A frozen version never changes: its content hash is its ETag, and If-None-Match answers 304. */
-export const GET = route({ access: { scope: 'read' }, params: versionPath }, async ({ req, caller, params }) => {
+export const GET = route('GET /api/correlations/{slug}/versions/{n}', { params: versionPath }, async ({ req, caller, params }) => {
   const detail = await getVersionDetail({ actor: caller!.user, slug: params.slug, version: params.n });
   // Status and sign-offs can still change (approved → superseded), so the tag covers them too.
   const etag = detail.contentHash ? `"${detail.contentHash}-${detail.status}-${detail.signOffs.length}"` : null;
@@ -13,5 +13,5 @@ export const GET = route({ access: { scope: 'read' }, params: versionPath }, asy
   return NextResponse.json(detail, { headers: etag ? { ETag: etag, 'Cache-Control': 'private, no-cache' } : { 'Cache-Control': 'no-store' } });
 });
 
-export const PATCH = route({ access: { roles: ['author'], scope: 'write' }, params: versionPath, body: updateDraftBody, maxBody: 5_000_000 }, async ({ caller, params, body }) =>
+export const PATCH = route('PATCH /api/correlations/{slug}/versions/{n}', { params: versionPath, body: updateDraftBody, maxBody: 5_000_000 }, async ({ caller, params, body }) =>
   updateDraft({ actor: caller!.user, slug: params.slug, version: params.n, definition: body.definition, checkCases: body.checkCases }));

@@ -5,5 +5,5 @@ import { deviationFromPrevious } from '@/lib/governance/review';
 
 const query = z.object({ sweep: z.string().max(32).optional(), output: z.string().max(32).optional() }).strict();
 
-export const GET = route({ access: { scope: 'read' }, params: versionPath, query }, async ({ caller, params, query }) =>
+export const GET = route('GET /api/correlations/{slug}/versions/{n}/deviation', { params: versionPath, query }, async ({ caller, params, query }) =>
   deviationFromPrevious({ actor: caller!.user, slug: params.slug, version: params.n, sweep: query.sweep, output: query.output }));
