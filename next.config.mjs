@@ -1,7 +1,7 @@
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   // Sequelize resolves optional dialect packages at run time; bundling it breaks the build.
-  serverExternalPackages: ['sequelize', 'mariadb', 'nodemailer', 'bcryptjs'],
+  serverExternalPackages: ['sequelize', 'mariadb', 'nodemailer', 'bcryptjs', 'piscina', 'tsx'],
   poweredByHeader: false,
   typescript: { ignoreBuildErrors: false },
   experimental: { turbopackFileSystemCacheForBuild: false },

@@ -12,6 +12,7 @@ import { pinsOf, type ChainResult, type Pin, type TemplateDefinition } from '@/l
 import { loadOwnChain, loadVerifiedTemplate, resolvePins } from '@/lib/evaluation/verified';
 import { runChain, type EvaluateRequest } from '@/lib/evaluation/service';
 import { flaggedCalculations, projectFor } from './projects';
+import { consumeRateLimit } from '@/lib/api/rate-limit';
 
 /** What a saved revision holds, frozen under its content hash. */
 export interface RevisionContent {
@@ -21,7 +22,7 @@ export interface RevisionContent {
   template: { slug: string; version: number; contentHash: string | null; title: string } | null;
   chain: TemplateDefinition;
   request: { inputs?: Record<string, unknown>; rows?: unknown[] };
-  answer: ReturnType<typeof runChain>;
+  answer: Awaited<ReturnType<typeof runChain>>;
   ranBy: string;
   ranAt: string;
 }
@@ -54,7 +55,7 @@ export async function saveCalculation({ actor, tokenId, request }: { actor: Auth
   if (runnable.template && runnable.template.status !== 'approved') {
     throw new AppError('invalid:template', `Version ${runnable.template.version} of "${runnable.template.slug}" is ${runnable.template.status.replace('_', ' ')}; calculations are saved from approved templates only.`);
   }
-  const answer = runChain({ actor, tokenId, runnable, request: { inputs: request.inputs, rows: request.rows } });
+  const answer = await runChain({ actor, tokenId, runnable, request: { inputs: request.inputs, rows: request.rows } });
   const content: RevisionContent = {
     format: 1, engineVersion: ENGINE_VERSION, title: request.title.trim(),
     template: runnable.template && { slug: runnable.template.slug, version: runnable.template.version, contentHash: runnable.template.contentHash, title: runnable.template.title },
@@ -150,7 +151,7 @@ export async function listCalculations({ actor, project }: { actor: AuthUser; pr
  * Re-runs a saved revision's inputs with every pinned correlation moved to its latest approved
  * version, and says step by step what changed and by how much. Nothing is saved.
  */
-export async function rerunCalculation({ actor, id, revision }: { actor: AuthUser; id: number; revision?: number }) {
+export async function rerunCalculation({ actor, tokenId, id, revision }: { actor: AuthUser; tokenId: number | null; id: number; revision?: number }) {
   const { calc } = await calculationFor(actor, id);
   const rev = await verifiedRevision(calc, revision ?? calc.latestRevision);
   const content = rev.content as RevisionContent;
@@ -176,6 +177,7 @@ export async function rerunCalculation({ actor, id, revision }: { actor: AuthUse
   let now: ChainResult;
   try {
     const chain = compileChain(rebased, resolve);
+    await consumeRateLimit({ userId: actor.id, tokenId, evaluations: chain.stepsPerRow });
     now = chain.runDetailed(chain.readInputs(content.request.inputs ?? {}, 'inputs'));
   } catch (err) {
     return { revision: rev.revision, moved, error: `The latest approved versions no longer fit this chain: ${(err as Error).message.slice(0, 400)}`, steps: [], outputs: [] };

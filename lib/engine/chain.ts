@@ -22,6 +22,8 @@ export type Resolve = (pin: Pin) => CompiledDefinition | { problem: string };
 const FUNCTION_IMPLS = Object.freeze(Object.fromEntries(Object.entries(FUNCTIONS).map(([k, v]) => [k, v.impl])));
 
 interface LeafRuntime {
+  cost: number;
+  steps: number;
   key: string;
   title: string;
   kind: 'correlation' | 'expression';
@@ -51,6 +53,10 @@ export interface CompiledChain {
   units: Map<string, string>;
   limits: CompiledLimit[];
   pins: Pin[];
+  /** Estimated work of one row (the costliest option of each choice); see CompiledDefinition.rowCost. */
+  rowCost: number;
+  /** Steps evaluated per row (the longest option of each choice): what the rate limit counts. */
+  stepsPerRow: number;
   readInputs(inputs: unknown, path: string): Float64Array;
   /** Outputs and every warning (with its step), as the check cases and the single API answer need. */
   evaluate(inputs: Record<string, unknown>): { outputs: Record<string, number>; warnings: ChainWarning[] };
@@ -111,7 +117,7 @@ export function compileChain(def: TemplateDefinition, resolve: Resolve): Compile
     if (!dimScope.has(symbol)) dimScope.set(symbol, quantity(1, units.get(symbol) ?? '1'));
     return dimScope.get(symbol);
   };
-  const checked = (source: string, pointer: string): { node: MathNode; symbols: string[] } | null => {
+  const checked = (source: string, pointer: string): { node: MathNode; symbols: string[]; nodes: number } | null => {
     try {
       return checkExpression(source, visible);
     } catch (err) {
@@ -172,7 +178,7 @@ export function compileChain(def: TemplateDefinition, resolve: Resolve): Compile
       sink?.push(w);
     };
     return {
-      key, title: step.title, kind: 'correlation', pin: step.use, reads, writes,
+      cost: c.rowCost, steps: c.stepsPerRow, key, title: step.title, kind: 'correlation', pin: step.use, reads, writes,
       run(v, s) {
         sink = s;
         for (let i = 0; i < nIn; i++) { const k = conversions[i]; work[i] = k.a * v[k.slot] + k.b; }
@@ -190,10 +196,12 @@ export function compileChain(def: TemplateDefinition, resolve: Resolve): Compile
     const reads = new Map<string, number>();
     const writes: LeafRuntime['writes'] = [];
     const code: string[] = [];
+    let nodes = 0;
     step.outputs.forEach((out, i) => {
       const p = `${pointer}/outputs/${i}`;
       const ce = checked(out.expression, `${p}/expression`);
       if (ce) {
+        nodes += ce.nodes;
         try {
           const value = withUnits(ce.node, ce.symbols);
           if (!hasDimensionOf(value, out.unit)) issues.push({ stage: 'dimensions', pointer: `${p}/expression`, message: `${out.symbol} has dimension ${describeDimension(value)} but is declared ${isDimensionless(out.unit) ? 'dimensionless (1)' : out.unit}` });
@@ -214,7 +222,7 @@ export function compileChain(def: TemplateDefinition, resolve: Resolve): Compile
     const body = new Function('v', 'F', `"use strict";\n${code.join('\n')}\nreturn null;`) as (v: Float64Array, F: unknown) => string | null;
     const key = step.key;
     return {
-      key, title: step.title, kind: 'expression', pin: null,
+      cost: nodes, steps: step.outputs.length, key, title: step.title, kind: 'expression', pin: null,
       // What the step takes from before it; a value it computes itself (h in q = h·A·ΔT) is not an input.
       reads: [...reads].filter(([name]) => !writes.some((w) => w.symbol === name)).map(([name, slot]) => ({ name, slot, unit: units.get(name)!, a: 1, b: 0 })), writes,
       run(v, sink) {
@@ -364,6 +372,8 @@ export function compileChain(def: TemplateDefinition, resolve: Resolve): Compile
     units,
     limits,
     pins: pinsOf(def),
+    rowCost: runtime.reduce((sum, r) => sum + (r.kind === 'leaf' ? r.leaf.cost : Math.max(...r.choice.options.map((o) => o.leaves.reduce((a, l) => a + l.cost, 0)))), 0),
+    stepsPerRow: runtime.reduce((sum, r) => sum + (r.kind === 'leaf' ? r.leaf.steps : Math.max(...r.choice.options.map((o) => o.leaves.reduce((a, l) => a + l.steps, 0)))), 0),
     readInputs,
     evaluate(inputs) {
       const r = runDetailed(readInputs(inputs, 'inputs'));

@@ -60,6 +60,10 @@ export interface CompiledDefinition {
   exec(v: Float64Array, W: (limitIndex: number, value: number) => void): void;
   nSlots: number;
   outputSlots: number[];
+  /** Estimated work of one row, in expression-tree nodes evaluated (an implicit solve counts SOLVE_ITERATIONS times). */
+  rowCost: number;
+  /** Steps and outputs evaluated per row: what the rate limit counts. */
+  stepsPerRow: number;
   /** Turns API-style inputs into numbers in declared units; `path` prefixes error paths. */
   readInputs(inputs: unknown, path: string): Float64Array;
   /** The generated JavaScript, for inspection and tests. */
@@ -174,6 +178,23 @@ export function readInputValues(declared: InputDef[], inputs: unknown, path: str
 }
 
 /** Compiles a definition (schema-checked, analysed) into a fast evaluator over plain numbers. */
+/** Brent's method typically converges in well under this many residual evaluations (cost estimate only). */
+export const SOLVE_ITERATIONS = 40;
+/** Largest estimated work of one row a definition may have: the complexity cap checked at validation. */
+export const MAX_ROW_COST = 50_000;
+
+/** Estimated work of one row of an analysed definition (see rowCost). */
+export function rowCostOf(analysed: Analysed): number {
+  let cost = 0;
+  for (const { step, checked } of analysed.steps) {
+    if (step.kind === 'solve') cost += SOLVE_ITERATIONS * (checked[0]?.nodes ?? 1) + (checked[1]?.nodes ?? 1) + (checked[2]?.nodes ?? 1);
+    else if (step.kind === 'table') cost += 8;
+    else cost += checked[0]?.nodes ?? 1;
+  }
+  for (const out of analysed.outputs) cost += out.checked.nodes;
+  return cost + analysed.definition.inputs.length;
+}
+
 export function compileDefinition(definition: Definition): CompiledDefinition {
   const schemaIssues = checkDefinitionSchema(definition);
   if (schemaIssues.length) throw new DefinitionError(schemaIssues.map((i) => ({ stage: 'schema', ...i })));
@@ -300,6 +321,8 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
     exec: (v, W) => run(v, W, FUNCTION_IMPLS as never, solveStep, tableStep),
     nSlots,
     outputSlots,
+    rowCost: rowCostOf(analysed),
+    stepsPerRow: (definition.steps?.length ?? 0) + definition.outputs.length,
     source,
   };
 }

@@ -96,6 +96,8 @@ export interface CheckedExpression {
   node: MathNode;
   /** Declared symbols the expression reads. */
   symbols: string[];
+  /** Size of the checked tree (nodes), the unit of the cost estimate. */
+  nodes: number;
 }
 
 /** Parses and whitelists an expression; `declared` is every symbol it may read. */
@@ -159,7 +161,7 @@ export function checkExpression(source: string, declared: ReadonlySet<string>): 
     }
   };
   walk(node as unknown as AnyNode, 0);
-  return { source, node, symbols: [...symbols] };
+  return { source, node, symbols: [...symbols], nodes: count };
 }
 
 function numberLiteral(v: number): string {

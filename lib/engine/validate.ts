@@ -1,7 +1,7 @@
 import { checkCheckCaseSchema, checkDefinitionSchema, checkTemplateSchema } from './schema';
 import { analyseDefinition, DefinitionError, type DefinitionIssue, type Stage } from './analyse';
 import { checkDimensions } from './dimensions';
-import { compiled, EvaluationError, InputError, type CompiledDefinition } from './compile';
+import { compiled, EvaluationError, InputError, MAX_ROW_COST, rowCostOf, SOLVE_ITERATIONS, type CompiledDefinition } from './compile';
 import { compileChain, type Resolve } from './chain';
 import type { CheckCase, Definition, InputDef, Warning } from './types';
 import type { TemplateDefinition } from './template-types';
@@ -189,7 +189,11 @@ export function validateVersion(definition: unknown, checkCases: unknown[]): Val
     add(issues);
     if (!analysed) return null;
     add(checkDimensions(analysed));
-    if (!passed('dimensions')) return null;
+    const cost = rowCostOf(analysed);
+    if (cost > MAX_ROW_COST) {
+      add([{ stage: 'expressions', pointer: '/steps', message: `the definition is too expensive to evaluate: about ${cost.toLocaleString('en')} operations per row (implicit solves count ${SOLVE_ITERATIONS} times), more than the ${MAX_ROW_COST.toLocaleString('en')} allowed; simplify it or split it into a calculation template` }]);
+    }
+    if (!passed('dimensions') || !passed('expressions')) return null;
     return compiled(def);
   });
 }

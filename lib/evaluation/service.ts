@@ -2,8 +2,11 @@ import 'server-only';
 import { AppError } from '@/lib/http/errors';
 import type { AuthUser } from '@/lib/auth/users';
 import { EvaluationError, InputError, type InputIssue } from '@/lib/engine/compile';
+import type { ChainWarning } from '@/lib/engine/template-types';
 import { recordUsage } from '@/lib/api/usage';
+import { consumeRateLimit } from '@/lib/api/rate-limit';
 import { loadVerifiedCorrelation, loadVerifiedTemplate, type RunnableChain } from './verified';
+import { INLINE_WORK, runOnPool } from './pool';
 
 export const MAX_ROWS = 10_000;
 /** Field problems listed in one answer: the first ones and a count, never an answer larger than the body. */
@@ -59,10 +62,14 @@ export async function evaluateCorrelation({ actor, tokenId, slug, request }: { a
   assertRowCount(request.rows);
   const { version: v, compiled: c, notices } = await loadVerifiedCorrelation({ actor, slug, version: request.version });
   const head = { slug, version: v.version, contentHash: v.contentHash, status: v.status };
+  const count = request.rows?.length ?? 1;
+  await consumeRateLimit({ userId: actor.id, tokenId, evaluations: count * c.stepsPerRow });
 
   if (request.rows) {
     const flat = readRows(request.rows, c.inputSymbols.length, c.readInputs);
-    const out = c.runMany(flat, request.rows.length);
+    // Small batches run here, on the fast path; big ones on the worker pool within the time budget.
+    const out = count * c.rowCost <= INLINE_WORK ? c.runMany(flat, count)
+      : await runOnPool({ kind: 'correlation', version: { definitionText: v.definitionText, contentHash: v.contentHash }, rows: flat, count }, `Evaluating ${count} rows of "${slug}"`);
     const m = c.outputSymbols.length;
     const results = request.rows.map((_, r) => {
       const err = out.errors.get(r);
@@ -88,7 +95,7 @@ export async function evaluateCorrelation({ actor, tokenId, slug, request }: { a
  * Runs a chain for one input set — with the record of every step — or for a batch of rows
  * (outputs, warnings and the options picked, per row). Every version used counts as used.
  */
-export function runChain({ actor, tokenId, runnable, request }: { actor: AuthUser; tokenId: number | null; runnable: RunnableChain; request: EvaluateRequest }) {
+export async function runChain({ actor, tokenId, runnable, request }: { actor: AuthUser; tokenId: number | null; runnable: RunnableChain; request: EvaluateRequest }) {
   assertRowCount(request.rows);
   const { chain, template, notices } = runnable;
   const head = {
@@ -96,13 +103,15 @@ export function runChain({ actor, tokenId, runnable, request }: { actor: AuthUse
     title: template?.title ?? chain.definition.title, units: Object.fromEntries(chain.outputSymbols.map((s) => [s, chain.units.get(s)!])),
   };
   const count = request.rows ? request.rows.length : 1;
+  await consumeRateLimit({ userId: actor.id, tokenId, evaluations: count * chain.stepsPerRow });
   const used = () => {
     for (const id of runnable.usedVersionIds) recordUsage({ userId: actor.id, tokenId, versionId: id, evaluations: count });
   };
 
   if (request.rows) {
     const flat = readRows(request.rows, chain.inputSymbols.length, chain.readInputs);
-    const out = chain.runMany(flat, count);
+    const out = count * chain.rowCost <= INLINE_WORK ? chain.runMany(flat, count)
+      : await runOnPool<ChainWarning>({ kind: 'chain', key: template?.contentHash ?? null, definition: chain.definition, pins: runnable.pinned, rows: flat, count }, `Running ${count} rows of "${head.title}"`);
     const m = chain.outputSymbols.length;
     const choices = chain.definition.steps.flatMap((s) => (s.kind === 'choice' ? [s] : []));
     const results = request.rows.map((_, r) => {

@@ -91,6 +91,8 @@ export interface RunnableChain {
   notices: ChainWarning[];
   /** Ids of the versions used (the template's and every pinned correlation's), for usage records. */
   usedVersionIds: number[];
+  /** The pinned correlations' stored definitions, for the worker pool (verified above). */
+  pinned: (Pin & { definitionText: string })[];
 }
 
 async function prepare(definition: TemplateDefinition, cacheKey: string | null, what: string, forNewWork: boolean) {
@@ -114,15 +116,19 @@ async function prepare(definition: TemplateDefinition, cacheKey: string | null, 
     if (forNewWork && pv.status === 'withdrawn') throw new AppError('invalid:chain', `${pin.slug} version ${pin.version} was withdrawn; a new calculation cannot use it.`);
     for (const w of versionNotices(pv, `${pin.slug} version`)) notices.push({ ...w, step: stepsUsing(definition, pin)[0] ?? 'template' });
   }
-  return { chain, notices, pinnedIds: pins.map((p) => versions.get(`${p.slug}@${p.version}`)!.id) };
+  return {
+    chain, notices, pinnedIds: pins.map((p) => versions.get(`${p.slug}@${p.version}`)!.id),
+    pinned: pins.map((p) => ({ ...p, definitionText: versions.get(`${p.slug}@${p.version}`)!.definitionText })),
+  };
 }
 
 export async function loadVerifiedTemplate({ actor, slug, version }: { actor: AuthUser; slug: string; version?: number }): Promise<RunnableChain> {
   const v = await loadServableVersion({ actor, slug, version, kind: 'template' as EntryKind });
   await verifyFrozen(v, slug);
   const definition = JSON.parse(v.definitionText) as TemplateDefinition;
-  const { chain, notices, pinnedIds } = await prepare(definition, v.contentHash, `Version ${v.version} of the template "${slug}"`, false);
+  const { chain, notices, pinnedIds, pinned } = await prepare(definition, v.contentHash, `Version ${v.version} of the template "${slug}"`, false);
   return {
+    pinned,
     template: { id: v.id, slug, version: v.version, contentHash: v.contentHash, status: v.status, title: v.title },
     chain, notices: [...versionNotices(v, 'Template version').map((w) => ({ ...w, step: 'template' })), ...notices],
     usedVersionIds: [v.id, ...pinnedIds],
@@ -138,8 +144,8 @@ export async function loadOwnChain(definition: unknown): Promise<RunnableChain> 
   if (issues.length) {
     throw new AppError('invalid:chain', `The chain is not valid: ${issues.slice(0, 3).map((i) => `${i.pointer}: ${i.message}`).join('; ')}`, { issues: issues.slice(0, 50).map((i) => ({ path: `chain${i.pointer}`, message: i.message })) });
   }
-  const { chain, notices, pinnedIds } = await prepare(definition as TemplateDefinition, null, 'The chain', true);
-  return { template: null, chain, notices, usedVersionIds: pinnedIds };
+  const { chain, notices, pinnedIds, pinned } = await prepare(definition as TemplateDefinition, null, 'The chain', true);
+  return { template: null, chain, notices, usedVersionIds: pinnedIds, pinned };
 }
 
 /** Keys of the steps that use a pin. */

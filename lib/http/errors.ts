@@ -23,6 +23,7 @@ const STATUS_BY_KIND: Record<string, number> = {
   too_large: 413,
   invalid: 422,
   rate_limited: 429,
+  unavailable: 503,
 };
 
 export function statusOf(code: string): number {

@@ -1,9 +1,7 @@
 import { route } from '@/lib/http/handler';
 import { correlationPath, evaluateBody } from '@/lib/api/contract';
 import { evaluateCorrelation } from '@/lib/evaluation/service';
-import { consumeRateLimit } from '@/lib/api/rate-limit';
 
 export const POST = route('POST /api/correlations/{slug}/evaluate', { params: correlationPath, body: evaluateBody, maxBody: 8_000_000 }, async ({ caller, params, body }) => {
-  await consumeRateLimit({ userId: caller!.user.id, tokenId: caller!.tokenId });
   return evaluateCorrelation({ actor: caller!.user, tokenId: caller!.tokenId, slug: params.slug, request: body });
 });

@@ -1,9 +1,7 @@
 import { route } from '@/lib/http/handler';
 import { correlationPath, runBody } from '@/lib/api/contract';
 import { runTemplate } from '@/lib/evaluation/service';
-import { consumeRateLimit } from '@/lib/api/rate-limit';
 
 export const POST = route('POST /api/templates/{slug}/run', { params: correlationPath, body: runBody, maxBody: 8_000_000 }, async ({ caller, params, body }) => {
-  await consumeRateLimit({ userId: caller!.user.id, tokenId: caller!.tokenId });
   return runTemplate({ actor: caller!.user, tokenId: caller!.tokenId, slug: params.slug, request: body });
 });
