@@ -2,6 +2,8 @@ import { z, type ZodType } from 'zod';
 import {
   correlationAnswer, correlationPath, evaluateAnswer, evaluateBody, errorAnswer, listAnswer, listQuery, versionAnswer, versionPath,
   createCorrelationBody, updateDraftBody, decisionBody, withdrawBody, compareBody,
+  templatesQuery, templateListAnswer, runBody, runAnswer, idParam, createProjectBody, memberBody, saveCalculationBody,
+  calculationsQuery, calculationQuery,
 } from './contract';
 import { ENGINE_VERSION } from '@/lib/engine/validate';
 
@@ -29,6 +31,7 @@ export function openApiDocument(serverUrl: string) {
     400: 'Malformed request (not JSON, empty body)', 401: 'No valid session or API token', 403: 'Authenticated but not allowed (role or token scope)',
     404: 'Unknown correlation or version, or not visible to the caller', 409: 'Conflicting state (frozen, already decided, integrity alarm)',
     413: 'Body or batch too large', 422: 'Body, query or inputs failed validation; details.issues names each field', 429: 'Rate limit reached; see Retry-After',
+    503: 'The evaluation pool is busy; see Retry-After',
   };
   return {
     openapi: '3.1.0',
@@ -40,7 +43,7 @@ export function openApiDocument(serverUrl: string) {
     security: [{ bearer: [] }, { session: [] }],
     components: {
       securitySchemes: {
-        bearer: { type: 'http', scheme: 'bearer', description: 'Personal API token (scopes read, evaluate), created on the Account page or with npm run token.' },
+        bearer: { type: 'http', scheme: 'bearer', description: 'Personal API token (scopes read, evaluate, write), created on the Account page or with npm run token. Routes for people only (sign-off, withdrawal, tokens, users, project membership) refuse every token.' },
         session: { type: 'apiKey', in: 'cookie', name: 'next-auth.session-token', description: 'Browser session' },
       },
       schemas: { Error: schema(errorAnswer) },
@@ -72,6 +75,30 @@ export function openApiDocument(serverUrl: string) {
         },
       },
       '/api/compare': { post: { operationId: 'compare', summary: 'Evaluate several correlations over a range of one input', requestBody: { required: true, ...json(compareBody, 'input') }, responses: { 200: { description: 'Series and largest differences' }, ...errors(401, 403, 404, 422) } } },
+      '/api/templates': {
+        get: { operationId: 'listTemplates', summary: 'Calculation templates with their latest approved version', parameters: params(templatesQuery, 'query'), responses: { 200: { description: 'Templates', ...json(templateListAnswer) }, ...errors(401, 403, 422) } },
+      },
+      '/api/templates/{slug}/run': {
+        post: {
+          operationId: 'runTemplate', summary: 'Run a calculation template: one input set with every step, or a batch of rows', parameters: params(correlationPath, 'path'),
+          requestBody: { required: true, ...json(runBody, 'input') },
+          responses: { 200: { description: 'Every step (single) or every row (batch) with range warnings at their step, the template version and hash', ...json(runAnswer) }, ...errors(400, 401, 403, 404, 409, 413, 422, 429, 503) },
+        },
+      },
+      '/api/projects': {
+        get: { operationId: 'listProjects', summary: 'Projects the caller may read', responses: { 200: { description: 'Projects' }, ...errors(401, 403) } },
+        post: { operationId: 'createProject', summary: 'Create a project (engineers)', requestBody: { required: true, ...json(createProjectBody, 'input') }, responses: { 200: { description: 'Created' }, ...errors(401, 403, 422) } },
+      },
+      '/api/projects/{id}': { get: { operationId: 'getProject', summary: 'A project with its members and calculations (flags for withdrawn versions)', parameters: params(idParam, 'path'), responses: { 200: { description: 'The project' }, ...errors(401, 403, 404) } } },
+      '/api/projects/{id}/members': { post: { operationId: 'setProjectMember', summary: 'Add, change or remove a member (owner or admin, browser session)', parameters: params(idParam, 'path'), requestBody: { required: true, ...json(memberBody, 'input') }, responses: { 200: { description: 'Members updated' }, ...errors(401, 403, 404, 422) } } },
+      '/api/calculations': {
+        get: { operationId: 'listCalculations', summary: 'Calculations of a project', parameters: params(calculationsQuery, 'query'), responses: { 200: { description: 'Calculations' }, ...errors(401, 403, 404, 422) } },
+        post: { operationId: 'saveCalculation', summary: 'Run and save a calculation or its next revision (the server runs it; the record is frozen under a content hash)', requestBody: { required: true, ...json(saveCalculationBody, 'input') }, responses: { 200: { description: 'Saved: id, revision, content hash' }, ...errors(400, 401, 403, 404, 409, 413, 422, 429) } },
+      },
+      '/api/calculations/{id}': { get: { operationId: 'getCalculation', summary: 'A saved calculation revision (integrity-checked) with flags and history', parameters: [...params(idParam, 'path'), ...params(calculationQuery, 'query')], responses: { 200: { description: 'The calculation' }, ...errors(401, 403, 404, 409) } } },
+      '/api/calculations/{id}/rerun': { post: { operationId: 'rerunCalculation', summary: 'Re-run a saved revision against the latest approved versions and compare step by step (nothing saved)', parameters: [...params(idParam, 'path'), ...params(calculationQuery, 'query')], responses: { 200: { description: 'Changes by step' }, ...errors(401, 403, 404, 409, 422, 429) } } },
+      '/api/calculations/{id}/csv': { get: { operationId: 'calculationCsv', summary: 'CSV export of a saved revision', parameters: [...params(idParam, 'path'), ...params(calculationQuery, 'query')], responses: { 200: { description: 'CSV', content: { 'text/csv': { schema: { type: 'string' } } } }, ...errors(401, 403, 404, 409) } } },
+      '/api/correlations/{slug}/versions/{n}/uses': { get: { operationId: 'versionUses', summary: 'What uses a version: calculations, templates, evaluations by person (approvers, admins)', parameters: params(versionPath, 'path'), responses: { 200: { description: 'Uses' }, ...errors(401, 403, 404) } } },
       '/api/health': { get: { operationId: 'health', summary: 'Database reachable and no pending migration', security: [], responses: { 200: { description: 'Healthy' }, 503: { description: 'Not ready' } } } },
     },
   };
