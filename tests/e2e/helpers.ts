@@ -10,9 +10,14 @@ export async function signInAs(page: Page, who: string) {
   await expect(page).toHaveURL(/\/library/);
 }
 
-/** Fails the test if the page ever requests anything outside loopback. */
+/**
+ * Collects what must never happen on a page: a request outside loopback, an uncaught error in the
+ * page, or a Content-Security-Policy refusal. Tests assert the list stays empty.
+ */
 export function guardOffline(page: Page): string[] {
   const outside: string[] = [];
+  page.on('pageerror', (err) => outside.push(`page error: ${err.message}`));
+  page.on('console', (msg) => { if (msg.type() === 'error' && /Content Security Policy/i.test(msg.text())) outside.push(`CSP: ${msg.text()}`); });
   page.on('request', (req) => {
     const url = new URL(req.url());
     if (!['127.0.0.1', 'localhost', '[::1]'].includes(url.hostname) && !['data:', 'blob:'].includes(url.protocol)) outside.push(req.url());
