@@ -14,6 +14,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare isActive: CreationOptional<boolean>;
   declare failedLogins: CreationOptional<number>;
   declare lockedUntil: Date | null;
+  /** Sessions carry the number they were issued under; bumping it ends them all. */
+  declare sessionVersion: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare roles?: NonAttribute<UserRole[]>;
@@ -38,6 +40,7 @@ export function initUser(sequelize: Sequelize) {
       isActive: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
       failedLogins: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
       lockedUntil: { type: DataTypes.DATE(3), allowNull: true },
+      sessionVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
       createdAt: DataTypes.DATE(3),
       updatedAt: DataTypes.DATE(3),
     },

@@ -3,7 +3,7 @@ import 'next-auth/jwt';
 
 declare module 'next-auth' {
   interface Session {
-    user: { id: number; roles: string[]; name?: string | null; email?: string | null; image?: string | null };
+    user: { id: number; roles: string[]; sv: number; name?: string | null; email?: string | null; image?: string | null };
   }
 }
 
@@ -11,5 +11,6 @@ declare module 'next-auth/jwt' {
   interface JWT {
     uid?: number;
     roles?: string[];
+    sv?: number;
   }
 }

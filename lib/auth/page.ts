@@ -9,7 +9,7 @@ import type { Role } from '@/models';
 export async function requireUser(): Promise<AuthUser> {
   const session = await getServerSession(authOptions);
   const user = session?.user?.id ? await findUserById({ id: session.user.id }) : null;
-  if (!user || !user.isActive) redirect('/sign-in');
+  if (!user || !user.isActive || user.sessionVersion !== (session?.user.sv ?? 0)) redirect('/sign-in');
   return toAuthUser(user);
 }
 

@@ -3,10 +3,9 @@ import { z } from 'zod';
 import { db, ROLES, type Role, type User } from '@/models';
 import { AppError } from '@/lib/http/errors';
 import { appendAuditEvent } from '@/lib/audit/log';
+import { assertNotThrottled, clearFailures, personBuckets, recordFailure, signInBuckets, throttledCheck } from './throttle';
 import { hashPassword, verifyPassword, PASSWORD_MAX, PASSWORD_MIN } from './passwords';
 
-export const MAX_FAILED_LOGINS = 5;
-export const LOCK_MINUTES = 15;
 
 let dummy: Promise<string> | undefined;
 const dummyHash = () => (dummy ??= hashPassword('correlary-timing-equaliser'));
@@ -35,32 +34,29 @@ export async function findUserById({ id }: { id: number }): Promise<User | null>
 }
 
 /**
- * Checks e-mail and password. After MAX_FAILED_LOGINS consecutive failures the account is locked
- * for LOCK_MINUTES; the answer never says whether the e-mail exists.
+ * Checks e-mail and password under the sign-in throttle (lib/auth/throttle.ts): wrong passwords slow
+ * down their source instead of locking the account. Unknown accounts, inactive ones and wrong
+ * passwords get the same answer after the same work (a password hash is always checked).
  */
-export async function authenticate({ email, password }: { email: string; password: string }): Promise<AuthUser> {
+export async function authenticate({ email, password, client }: { email: string; password: string; client: string }): Promise<AuthUser & { sessionVersion: number }> {
   const { User, UserRole } = db();
+  const buckets = signInBuckets(email, client);
+  await assertNotThrottled(buckets, 'this sign-in');
   const user = await User.findOne({ where: { email: email.trim().toLowerCase() }, include: [{ model: UserRole, as: 'roles' }] });
-  if (!user || !user.isActive) {
-    // Spend the same time as a real check, so timing does not reveal which accounts exist.
-    await verifyPassword(password, await dummyHash());
+  const ok = user?.isActive ? await verifyPassword(password, user.passwordHash) : (await verifyPassword(password, await dummyHash()), false);
+  if (!ok || !user) {
+    await recordFailure(buckets);
     throw new AppError('unauthenticated:credentials', 'E-mail or password is not correct.');
   }
-  if (user.lockedUntil && user.lockedUntil.getTime() > Date.now()) {
-    const minutes = Math.ceil((user.lockedUntil.getTime() - Date.now()) / 60_000);
-    throw new AppError('unauthenticated:locked', `Too many failed attempts. This account is locked; try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`);
-  }
-  if (!(await verifyPassword(password, user.passwordHash))) {
-    const failed = user.failedLogins + 1;
-    const lock = failed >= MAX_FAILED_LOGINS;
-    await user.update({ failedLogins: lock ? 0 : failed, lockedUntil: lock ? new Date(Date.now() + LOCK_MINUTES * 60_000) : user.lockedUntil });
-    throw new AppError(
-      lock ? 'unauthenticated:locked' : 'unauthenticated:credentials',
-      lock ? `Too many failed attempts. This account is locked for ${LOCK_MINUTES} minutes.` : 'E-mail or password is not correct.',
-    );
-  }
-  if (user.failedLogins || user.lockedUntil) await user.update({ failedLogins: 0, lockedUntil: null });
-  return toAuthUser(user);
+  // The client address bucket keeps counting: one good account does not clear guessing at others.
+  await clearFailures([buckets[0], buckets[2]]);
+  return { ...toAuthUser(user), sessionVersion: user.sessionVersion };
+}
+
+/** Ends every session of a user (password change, sign-out everywhere, deactivation, role change). */
+export async function endSessions({ userId, transaction }: { userId: number; transaction?: Transaction }) {
+  const { User } = db();
+  await User.increment('sessionVersion', { by: 1, where: { id: userId }, transaction });
 }
 
 export async function listUsers() {
@@ -107,6 +103,10 @@ export async function updateUser({ actorId, userId, roles, isActive, name }: {
     if (isActive !== undefined) patch.isActive = isActive;
     if (name !== undefined) patch.name = name;
     if (Object.keys(patch).length) await user.update(patch, { transaction });
+    const rolesChanged = roles !== undefined && before.roles.join() !== [...new Set(roles)].sort().join();
+    if (isActive === false || rolesChanged) await endSessions({ userId, transaction });
+    // A deactivated person's tokens die with the account: reactivation never revives them.
+    if (isActive === false && before.isActive) await db().ApiToken.update({ revokedAt: new Date() }, { where: { userId, revokedAt: null }, transaction });
     const after = { roles: roles ? [...new Set(roles)].sort() : before.roles, isActive: isActive ?? before.isActive, name: name ?? before.name };
     const action = roles && before.roles.join() !== after.roles.join() ? 'user.roles-changed' : 'user.updated';
     await appendAuditEvent({ transaction, event: { actorId, action, entityType: 'user', entityId: String(userId), details: { before, after } } });
@@ -120,12 +120,13 @@ export async function changePassword({ userId, currentPassword, newPassword }: {
   const { sequelize } = db();
   const user = await findUserById({ id: userId });
   if (!user) throw new AppError('not_found:user', 'User not found.');
-  if (!(await verifyPassword(currentPassword, user.passwordHash))) {
+  if (!(await throttledCheck(personBuckets('password-change', userId), 'the password change', () => verifyPassword(currentPassword, user.passwordHash)))) {
     throw new AppError('invalid:password', 'The current password is not correct.', { issues: [{ path: 'currentPassword', message: 'Not correct' }] });
   }
   const passwordHash = await hashPassword(newPassword);
   await sequelize.transaction(async (transaction) => {
     await user.update({ passwordHash }, { transaction });
+    await endSessions({ userId, transaction });
     await appendAuditEvent({ transaction, event: { actorId: userId, action: 'user.password-changed', entityType: 'user', entityId: String(userId) } });
   });
 }

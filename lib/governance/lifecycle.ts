@@ -5,6 +5,7 @@ import { appendAuditEvent } from '@/lib/audit/log';
 import { enqueueMail, deliverPendingMail, isMailDeferred, type MailMessage } from '@/lib/mail/outbox';
 import { usersWithRole, findUserById, type AuthUser } from '@/lib/auth/users';
 import { verifyPassword } from '@/lib/auth/passwords';
+import { personBuckets, throttledCheck } from '@/lib/auth/throttle';
 import { validateVersion, type ValidationReport } from '@/lib/engine/validate';
 import { checkCheckCaseSchema, checkDefinitionSchema, checkTemplateSchema } from '@/lib/engine/schema';
 import { validateTemplate } from '@/lib/engine/validate';
@@ -256,7 +257,8 @@ export async function decideVersion({ actor, slug, version, decision, comment, p
   requireRole(actor, 'approver');
   if (decision === 'approve') {
     const me = await findUserById({ id: actor.id });
-    if (!me || !password || !(await verifyPassword(password, me.passwordHash))) {
+    // Wrong passwords at sign-off are throttled like sign-in: a stolen session cannot guess its way to a signature.
+    if (!me || !password || !(await throttledCheck(personBuckets('sign-off', actor.id), 'sign-off', () => verifyPassword(password, me.passwordHash)))) {
       throw new AppError('invalid:password', 'The password is not correct; the signature needs your current password.', { issues: [{ path: 'password', message: 'Not correct' }] });
     }
   }

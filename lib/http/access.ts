@@ -56,6 +56,7 @@ export const ACCESS = {
   'GET /api/calculations/{id}/csv': { scope: 'read' },
   // The caller's own account and tokens: in person only.
   'POST /api/account/password': {},
+  'DELETE /api/account/sessions': {},
   'GET /api/tokens': {},
   'POST /api/tokens': {},
   'DELETE /api/tokens/{id}': {},

@@ -63,7 +63,8 @@ async function identify(req: NextRequest): Promise<Caller | null> {
   if (!session?.user?.id) return null;
   // Roles are read fresh from the database: a role change or deactivation takes effect at once.
   const user = await findUserById({ id: session.user.id });
-  if (!user || !user.isActive) return null;
+  // A session issued before a password change, sign-out, deactivation or role change is over.
+  if (!user || !user.isActive || user.sessionVersion !== (session.user.sv ?? 0)) return null;
   return { user: { id: user.id, email: user.email, name: user.name, roles: user.roleNames() }, via: 'session', tokenId: null, scopes: null };
 }
 

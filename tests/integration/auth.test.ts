@@ -47,17 +47,24 @@ describe('authentication and role checks on the server', () => {
     expect((await signIn(`${'a'.repeat(200)}@x.example`, 'x')).error).toBe('E-mail or password is too long.');
   });
 
-  it('locks an account after repeated wrong passwords, even for the right password', async () => {
-    const email = `lockout-${Date.now()}@demo.example`;
-    await createUser({ actorId: null, email, name: 'Lockout Probe', password: 'right-password-123', roles: ['engineer'] });
+  it('slows down repeated wrong passwords from one client without locking the account for others, and says the same for unknown accounts', async () => {
+    const email = `throttle-${Date.now()}@demo.example`;
+    await createUser({ actorId: null, email, name: 'Throttle Probe', password: 'right-password-123', roles: ['engineer'] });
     await closeSequelize();
+    const attacker = { 'x-forwarded-for': '198.51.100.7' }; // documentation address range (RFC 5737)
     const answers: string[] = [];
-    for (let i = 0; i < 5; i++) answers.push((await signIn(email, 'wrong-password-000')).error ?? '');
-    expect(answers.slice(0, 4).every((a) => a === 'E-mail or password is not correct.')).toBe(true);
-    expect(answers[4]).toMatch(/locked for 15 minutes/);
-    const right = await signIn(email, 'right-password-123');
-    expect(right.cookie).toBeUndefined();
-    expect(right.error).toMatch(/locked; try again in 1[45] minutes/);
+    for (let i = 0; i < 6; i++) answers.push((await signIn(email, 'wrong-password-000', attacker)).error ?? '');
+    expect(answers.slice(0, 5).every((a) => a === 'E-mail or password is not correct.')).toBe(true);
+    expect(answers[5]).toMatch(/Too many wrong passwords for this sign-in\. Wait \d+ seconds?/);
+    // From the attacker's address even the right password waits; the owner elsewhere signs in.
+    expect((await signIn(email, 'right-password-123', attacker)).error).toMatch(/Wait/);
+    expect((await signIn(email, 'right-password-123', { 'x-forwarded-for': '203.0.113.20' })).cookie).toMatch(/session-token/);
+    // An account that does not exist gets the very same answers.
+    const ghost = `nobody-${Date.now()}@demo.example`;
+    const ghostAnswers: string[] = [];
+    for (let i = 0; i < 6; i++) ghostAnswers.push((await signIn(ghost, 'wrong-password-000', attacker)).error ?? '');
+    expect(ghostAnswers.slice(0, 5)).toEqual(answers.slice(0, 5));
+    expect(ghostAnswers[5].replace(/\d+/g, 'N')).toBe(answers[5].replace(/\d+/g, 'N'));
   });
 
   it('validates the user-creation body field by field', async () => {

@@ -98,6 +98,40 @@ describe('security: tokens, ownership, cross-site requests, bounded answers, hea
     expect((await call('/api/admin/users', { cookie: admin })).headers.get('cache-control')).toBe('no-store');
   });
 
+  it('7: wrong passwords at sign-off and at password change are throttled too', async () => {
+    const approver = await freshUser(['approver'], 'sec-signoff');
+    const decide = () => call('/api/correlations/friction-factor-blasius/versions/1/decision', { cookie: approver.cookie, body: { decision: 'approve', comment: '', password: 'not-my-password' } });
+    for (let i = 0; i < 5; i++) expect((await decide()).body.error.code).toBe('invalid:password');
+    const slowed = await decide();
+    expect(slowed.status).toBe(429);
+    expect(slowed.body.error.message).toMatch(/Too many wrong passwords for sign-off/);
+    expect(Number(slowed.headers.get('retry-after'))).toBeGreaterThan(0);
+    const change = () => call('/api/account/password', { cookie: approver.cookie, body: { currentPassword: 'wrong-current-1', newPassword: 'a-new-long-password-2' } });
+    for (let i = 0; i < 5; i++) expect((await change()).body.error.code).toBe('invalid:password');
+    expect((await change()).status).toBe(429);
+  });
+
+  it('8: password change, sign-out everywhere and deactivation end sessions; reactivation revives no token', async () => {
+    const who = await freshUser(['engineer'], 'sec-sessions');
+    const second = (await signIn(who.user.email, who.password)).cookie!;
+    expect((await call('/api/tokens', { cookie: second })).status).toBe(200);
+    expect((await call('/api/account/password', { cookie: who.cookie, body: { currentPassword: who.password, newPassword: 'a-brand-new-password-9' } })).status).toBe(200);
+    expect((await call('/api/tokens', { cookie: who.cookie })).status).toBe(401);
+    expect((await call('/api/tokens', { cookie: second })).status).toBe(401);
+    const third = (await signIn(who.user.email, 'a-brand-new-password-9')).cookie!;
+    expect((await call('/api/account/sessions', { cookie: third, method: 'DELETE' })).status).toBe(200);
+    expect((await call('/api/tokens', { cookie: third })).status).toBe(401);
+    const fourth = (await signIn(who.user.email, 'a-brand-new-password-9')).cookie!;
+    const t = await token(who.user.email, ['read']);
+    expect((await call('/api/correlations?pageSize=1', { token: t })).status).toBe(200);
+    expect((await call(`/api/admin/users/${who.user.id}`, { cookie: admin, method: 'PATCH', body: { isActive: false } })).status).toBe(200);
+    expect((await call('/api/tokens', { cookie: fourth })).status).toBe(401);
+    expect((await call('/api/correlations?pageSize=1', { token: t })).status).toBe(401);
+    expect((await call(`/api/admin/users/${who.user.id}`, { cookie: admin, method: 'PATCH', body: { isActive: true } })).status).toBe(200);
+    expect((await call('/api/correlations?pageSize=1', { token: t })).body.error.code).toBe('unauthenticated:token-revoked');
+    expect((await call('/api/tokens', { cookie: fourth })).status).toBe(401);
+  });
+
   it('11: the documented commands work from a fresh shell with nothing but PATH and HOME set', () => {
     const env = { PATH: process.env.PATH!, HOME: process.env.HOME ?? '/root', DB_NAME: process.env.DB_NAME! } as unknown as NodeJS.ProcessEnv;
     expect(execFileSync('npm', ['run', '-s', 'audit:verify'], { env, encoding: 'utf8' })).toMatch(/Audit chain intact: \d+ events/);

@@ -31,13 +31,13 @@ function cookiesOf(res: Response): string[] {
 }
 
 /** Signs in through next-auth's credentials flow; returns the session cookie header, or the error. */
-export async function signIn(email: string, password = DEMO_PASSWORD): Promise<{ cookie?: string; error?: string }> {
+export async function signIn(email: string, password = DEMO_PASSWORD, headers: Record<string, string> = {}): Promise<{ cookie?: string; error?: string }> {
   const csrfRes = await fetch(`${BASE}/api/auth/csrf`);
   const { csrfToken } = (await csrfRes.json()) as { csrfToken: string };
   const jar = cookiesOf(csrfRes);
   const res = await fetch(`${BASE}/api/auth/callback/credentials`, {
     method: 'POST',
-    headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: jar.join('; '), 'x-auth-return-redirect': '1' },
+    headers: { 'content-type': 'application/x-www-form-urlencoded', cookie: jar.join('; '), 'x-auth-return-redirect': '1', ...headers },
     body: new URLSearchParams({ csrfToken, email, password, json: 'true', callbackUrl: `${BASE}/library` }),
     redirect: 'manual',
   });

@@ -2,6 +2,7 @@ import type { Metadata } from 'next';
 import { requireUser } from '@/lib/auth/page';
 import { PasswordForm } from './password-form';
 import { MyTokens } from './my-tokens';
+import { EndSessions } from './end-sessions';
 
 export const metadata: Metadata = { title: 'Account' };
 
@@ -14,6 +15,7 @@ export default async function AccountPage() {
         <p className="text-sm text-ink-soft">{user.email}</p>
         <p className="text-sm">Roles: {user.roles.join(', ')}</p>
         <div className="pt-4"><PasswordForm /></div>
+        <div className="pt-4"><EndSessions /></div>
       </section>
       <MyTokens />
     </div>
