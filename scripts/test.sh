@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # Everything the tests need, then: type-check → migrations/seed on the test database → production
-# build → vitest (unit + integration against the real MariaDB and the running app) → Playwright.
+# build → vitest (unit + integration against the real MariaDB and the running app) → Playwright →
+# resilience (database outage, two app instances, a loopback load, backup and restore).
 set -euo pipefail
 ROOT="$(cd "$(dirname "$0")/.." && pwd)"
 cd "$ROOT"
@@ -60,8 +61,14 @@ done
 curl -fsS "$TEST_BASE_URL/api/health" >/dev/null || { echo "The app did not become healthy"; tail -40 "$DATA_DIR/server-test.log"; exit 1; }
 
 status=0
-echo "== vitest"
-./node_modules/.bin/vitest run || status=1
-echo "== playwright"
-./node_modules/.bin/playwright test || status=1
+# TEST_STAGES=resilience (npm run test:resilience) runs the last stage only.
+if [ "${TEST_STAGES:-all}" != "resilience" ]; then
+  echo "== vitest"
+  ./node_modules/.bin/vitest run || status=1
+  echo "== playwright"
+  ./node_modules/.bin/playwright test || status=1
+fi
+# Last, as they stop the database and start a second server: outage, two instances, load, backup.
+echo "== resilience (LOAD_SECONDS=${LOAD_SECONDS:-60})"
+./node_modules/.bin/vitest run --config vitest.resilience.config.mts || status=1
 exit $status

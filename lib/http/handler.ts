@@ -2,6 +2,7 @@ import 'server-only';
 import { NextResponse, type NextRequest } from 'next/server';
 import { getServerSession } from 'next-auth';
 import { z, type ZodType } from 'zod';
+import { ConnectionAcquireTimeoutError, ConnectionError, DatabaseError } from 'sequelize';
 import { authOptions } from '@/lib/auth/options';
 import { findUserById, type AuthUser } from '@/lib/auth/users';
 import { resolveApiToken, type TokenScope } from '@/lib/api/tokens';
@@ -37,6 +38,16 @@ export function zodIssues(error: z.ZodError) {
   return error.issues.map((i) => ({ path: i.path.join('.') || '(body)', message: i.message }));
 }
 
+/** A lost or refused database connection (not a bad query). */
+export function isDatabaseUnavailable(err: unknown): boolean {
+  if (err instanceof ConnectionError || err instanceof ConnectionAcquireTimeoutError) return true;
+  if (err instanceof DatabaseError) {
+    const original = (err as DatabaseError & { original?: { code?: string; message?: string } }).original;
+    return /ER_SOCKET_UNEXPECTED_CLOSE|ECONNRESET|ECONNREFUSED|ER_CONNECTION|ER_GET_CONNECTION_TIMEOUT|EPIPE/.test(`${original?.code ?? ''} ${original?.message ?? ''}`);
+  }
+  return false;
+}
+
 function errorResponse(err: unknown): Response {
   if (err instanceof AppError) {
     const status = statusOf(err.code);
@@ -46,6 +57,11 @@ function errorResponse(err: unknown): Response {
   // A unique index caught a race the service's own check could not see (two requests at once).
   if (err instanceof Error && err.name === 'SequelizeUniqueConstraintError') {
     return NextResponse.json({ error: { code: 'conflict:duplicate', message: 'Someone else just created the same thing; reload and try again.' } }, { status: 409 });
+  }
+  // The database is down or unreachable: say so, and let the client retry; the pool reconnects by itself.
+  if (isDatabaseUnavailable(err)) {
+    console.error('database unavailable:', (err as Error).message);
+    return NextResponse.json({ error: { code: 'unavailable:database', message: 'The database is not reachable just now; nothing was changed. Retry in a few seconds.' } }, { status: 503, headers: { 'Retry-After': '5', 'cache-control': 'no-store' } });
   }
   console.error('unhandled error in route handler', err);
   return NextResponse.json({ error: { code: 'internal', message: 'Something went wrong on the server; the error was logged.' } }, { status: 500 });

@@ -3,6 +3,7 @@ import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { call, DEMO_PASSWORD, signIn } from '../support/http';
 import { freshUser, plateCases, plateDefinition } from '../support/fixtures';
+import { QueryTypes } from 'sequelize';
 import { db } from '@/models';
 import { closeSequelize } from '@/lib/db/connection';
 import { readLibrary } from '@/lib/governance/library';
@@ -140,12 +141,20 @@ describe('calculations: templates, saved records, parametric runs and withdrawal
     // Tampering with the stored record is caught.
     const { CalculationRevision, sequelize } = db();
     const row = await CalculationRevision.findOne({ where: { calculationId: saved.body.id, revision: 1 } });
+    const original = JSON.stringify(row!.content);
     const content = row!.content as { answer: { outputs: { h: number } } };
     content.answer.outputs.h *= 1.1;
-    await sequelize.query('UPDATE calculation_revisions SET content = ? WHERE id = ?', { replacements: [JSON.stringify(content), row!.id], type: 'UPDATE' as never });
-    const tampered = await call(`/api/calculations/${saved.body.id}?revision=1`, { cookie: engineer.cookie });
-    expect(tampered.status).toBe(409);
-    expect(tampered.body.error.code).toBe('conflict:content-hash-mismatch');
+    await sequelize.query('UPDATE calculation_revisions SET content = ? WHERE id = ?', { replacements: [JSON.stringify(content), row!.id], type: QueryTypes.UPDATE });
+    try {
+      const tampered = await call(`/api/calculations/${saved.body.id}?revision=1`, { cookie: engineer.cookie });
+      expect(tampered.status).toBe(409);
+      expect(tampered.body.error.code).toBe('conflict:content-hash-mismatch');
+      const { verifyAllContent } = await import('@/lib/governance/content-check');
+      expect((await verifyAllContent()).mismatches).toEqual([`calculation ${saved.body.id} revision 1`]);
+    } finally {
+      await sequelize.query('UPDATE calculation_revisions SET content = ? WHERE id = ?', { replacements: [original, row!.id], type: QueryTypes.UPDATE });
+    }
+    expect((await call(`/api/calculations/${saved.body.id}?revision=1`, { cookie: engineer.cookie })).status).toBe(200);
   });
 
   it('runs a table of cases: per-row warnings and picks, bad cells named by row and column, nothing saved on error', async () => {

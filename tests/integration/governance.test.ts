@@ -188,6 +188,12 @@ describe('governance life cycle over HTTP against MariaDB', () => {
     expect(res.body.error.code).toBe('conflict:content-hash-mismatch');
     const alarms = await sequelize.query<{ entity_id: string }>("SELECT entity_id FROM audit_events WHERE action = 'integrity.hash-mismatch'", { type: QueryTypes.SELECT });
     expect(alarms.map((a) => a.entity_id)).toContain(`${tamper}@1`);
+    const { verifyAllContent } = await import('@/lib/governance/content-check');
+    expect((await verifyAllContent()).mismatches).toContain(`${tamper} version 1`);
+    // Undo the forgery so the database stays intact for the tests that follow.
+    await sequelize.query(`UPDATE correlation_versions v JOIN correlations c ON c.id = v.correlation_id
+      SET v.definition = REPLACE(v.definition, '0.532 *', '0.332 *') WHERE c.slug = ?`, { replacements: [tamper], type: QueryTypes.UPDATE });
+    expect((await verifyAllContent()).mismatches).toEqual([]);
   });
 
   it('refuses every life-cycle action to the roles that may not take it', async () => {
@@ -231,7 +237,7 @@ describe('governance life cycle over HTTP against MariaDB', () => {
       let exit = 0;
       let output = '';
       try {
-        execFileSync('node', ['--import', 'tsx', 'scripts/audit-verify.ts'], { env: process.env, encoding: 'utf8', stdio: 'pipe' });
+        execFileSync('bash', ['scripts/tsx.sh', 'scripts/audit-verify.ts'], { env: process.env, encoding: 'utf8', stdio: 'pipe' });
       } catch (err) {
         exit = (err as { status: number }).status;
         output = String((err as { stderr: string }).stderr);
