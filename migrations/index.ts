@@ -4,6 +4,7 @@ import * as correlations from './20261201000200-correlations-and-versions';
 import * as apiTokens from './20261201000300-api-tokens-usage-rate-limits';
 import * as calculations from './20261202000100-templates-projects-calculations';
 import * as throttle from './20261202000200-sign-in-throttle-and-session-versions';
+import * as evidence from './20261202000300-evidence-policy';
 
 export interface Migration {
   name: string;
@@ -12,4 +13,4 @@ export interface Migration {
 }
 
 /** Every migration in order. Add new files here; the name is what the tracking table records. */
-export const migrations: Migration[] = [usersAndRoles, correlations, apiTokens, calculations, throttle];
+export const migrations: Migration[] = [usersAndRoles, correlations, apiTokens, calculations, throttle, evidence];

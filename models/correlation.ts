@@ -42,6 +42,8 @@ export class CorrelationVersion extends Model<
   declare supersededAt: Date | null;
   declare withdrawnAt: Date | null;
   declare withdrawnReason: string | null;
+  /** Evidence grade computed at submission (lib/engine/evidence.ts). */
+  declare evidenceGrade: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare correlation?: NonAttribute<Correlation>;
@@ -73,6 +75,8 @@ export class SignOff extends Model<InferAttributes<SignOff>, InferCreationAttrib
   declare comment: string;
   declare meaning: string;
   declare contentHash: string | null;
+  /** Why an approver signed a version below the evidence policy. */
+  declare waiver: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
 }
 
@@ -119,6 +123,7 @@ export function initCorrelation(sequelize: Sequelize) {
       supersededAt: { type: DataTypes.DATE(3), allowNull: true },
       withdrawnAt: { type: DataTypes.DATE(3), allowNull: true },
       withdrawnReason: { type: DataTypes.TEXT, allowNull: true },
+      evidenceGrade: { type: DataTypes.STRING(20), allowNull: true },
       createdAt: DataTypes.DATE(3),
       updatedAt: DataTypes.DATE(3),
     },
@@ -154,6 +159,7 @@ export function initCorrelation(sequelize: Sequelize) {
       comment: { type: DataTypes.TEXT, allowNull: false },
       meaning: { type: DataTypes.STRING(300), allowNull: false },
       contentHash: { type: DataTypes.CHAR(64), allowNull: true },
+      waiver: { type: DataTypes.TEXT, allowNull: true },
       createdAt: DataTypes.DATE(3),
     },
     { sequelize, tableName: 'sign_offs', ...createdOnly },

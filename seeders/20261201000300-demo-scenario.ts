@@ -106,7 +106,7 @@ export async function up(): Promise<void> {
     const slug = 'brightwater-louvre-pressure-loss';
     await createCorrelation({ actor: author, slug, definition: louvre(1.9), checkCases: louvreCases(1.9) });
     await submitVersion({ actor: author, slug, version: 1 });
-    await decideVersion({ actor: approver, slug, version: 1, decision: 'approve', comment: 'Fit agrees with Table 3 within rig repeatability.', password: DEMO_PASSWORD });
+    await decideVersion({ actor: approver, slug, version: 1, decision: 'approve', comment: 'Fit agrees with Table 3 within rig repeatability.', password: DEMO_PASSWORD, waiver: 'In-house fit of our own louvre: the rig runs are the only data there are (one kind of evidence).' });
     // The TW-7 sizing sheet and the integrator's script used version 1 before the error was found.
     const { CorrelationVersion } = db();
     const c = await Correlation.findOne({ where: { slug } });

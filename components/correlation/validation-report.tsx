@@ -3,6 +3,7 @@
 import type { CheckCase } from '@/lib/engine/types';
 import type { ValidationReport } from '@/lib/engine/validate';
 import { formatNumber } from '@/lib/client/units';
+import { EvidenceSummary } from './evidence-summary';
 
 /** The validation report: stages, then every check case with computed, expected and error. */
 export function ValidationReportView({ report, checkCases, title = 'Validation report and check cases', emptyText }: { report: ValidationReport | null; checkCases: CheckCase[]; title?: string; emptyText?: string }) {
@@ -24,6 +25,7 @@ export function ValidationReportView({ report, checkCases, title = 'Validation r
             </ul>
           )}
           <p className="text-xs text-ink-soft">Coverage: {report.coverage.message}.</p>
+          <EvidenceSummary evidence={report.evidence} />
           {report.cases.length > 0 && (
             <div className="overflow-x-auto">
               <table className="table-plain">

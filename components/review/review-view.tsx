@@ -78,20 +78,21 @@ export function ReviewView({ slug, version, userId }: { slug: string; version: n
           {v.comments.length > 0 && <section className="panel"><h2 className="font-semibold">Comments</h2><ul className="text-sm">{v.comments.map((c, k) => <li key={k}>{c.by}: {c.body}</li>)}</ul></section>}
           {v.status !== 'in_review' ? <p className="panel text-sm">This version is {v.status.replace('_', ' ')}; there is nothing to decide.</p>
             : v.authorId === userId ? <p className="panel text-sm text-caution">You authored this version; another approver must review it (four-eyes rule).</p>
-            : <DecisionForm slug={slug} version={version} />}
+            : <DecisionForm slug={slug} version={version} needsWaiver={v.kind !== 'template' && Boolean(v.validation && !v.validation.evidence?.meetsPolicy)} />}
         </div>
       )}
     </QueryState>
   );
 }
 
-function DecisionForm({ slug, version }: { slug: string; version: number }) {
+function DecisionForm({ slug, version, needsWaiver }: { slug: string; version: number; needsWaiver: boolean }) {
   const router = useRouter();
   const [comment, setComment] = useState('');
+  const [waiver, setWaiver] = useState('');
   const [password, setPassword] = useState('');
   const [errors, setErrors] = useState<Record<string, string>>({});
   const decide = useMutation({
-    mutationFn: (decision: 'approve' | 'return') => api(`/api/correlations/${slug}/versions/${version}/decision`, { body: { decision, comment, ...(decision === 'approve' ? { password } : {}) } }),
+    mutationFn: (decision: 'approve' | 'return') => api(`/api/correlations/${slug}/versions/${version}/decision`, { body: { decision, comment, ...(decision === 'approve' ? { password, ...(needsWaiver ? { waiver } : {}) } : {}) } }),
     onSuccess: () => router.push(`/correlations/${slug}/versions/${version}`),
     onError: (e) => setErrors(e instanceof ApiError ? { ...e.fieldErrors(), form: e.message } : { form: String(e) }),
   });
@@ -101,6 +102,11 @@ function DecisionForm({ slug, version }: { slug: string; version: number }) {
       {errors.form && <p role="alert" className="text-sm text-danger">{errors.form}</p>}
       <Field label="Comment (required when returning)" error={errors.comment}>{(p) => <textarea {...p} rows={3} className="field-input" value={comment} onChange={(e) => setComment(e.target.value)} />}</Field>
       <p className="rounded border border-line bg-paper-sunk px-3 py-2 text-sm">Meaning of your signature: <em>{MEANING}</em></p>
+      {needsWaiver && (
+        <Field label="Waiver: why you approve below the evidence policy (recorded with your signature)" error={errors.waiver} hint="The validation report shows the evidence is below the approval policy; say why this version may be used anyway.">
+          {(p) => <textarea {...p} rows={2} className="field-input" value={waiver} onChange={(e) => setWaiver(e.target.value)} />}
+        </Field>
+      )}
       <Field label="Your password, to sign" error={errors.password}>{(p) => <input {...p} type="password" autoComplete="current-password" className="field-input max-w-xs" value={password} onChange={(e) => setPassword(e.target.value)} />}</Field>
       <div className="flex gap-2">
         <button type="button" className="btn-primary" disabled={decide.isPending} onClick={() => { if (!password) { setErrors({ password: 'Enter your password to sign' }); return; } decide.mutate('approve'); }}>Approve and sign</button>

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { CATEGORIES } from '@/lib/engine/types';
+import { CATEGORIES, SOURCE_KINDS } from '@/lib/engine/types';
 import { VERSION_STATUSES } from '@/models/correlation';
 
 /**
@@ -70,7 +70,7 @@ export const correlationAnswer = z.object({
 export const checkCaseShape = z.object({
   label: z.string(), inputs: z.record(z.string(), inputValue), expected: z.record(z.string(), z.number()),
   tolerance: z.object({ rel: z.number().optional(), abs: z.number().optional(), why: z.string().optional() }),
-  source: z.object({ kind: z.enum(['published', 'numerical', 'common-practice', 'memory']), citation: z.string(), locator: z.string().optional() }),
+  source: z.object({ kind: z.enum(SOURCE_KINDS), citation: z.string(), locator: z.string().optional() }),
   expectWarnings: z.array(z.string()).optional(), expectRefusal: z.boolean().optional(),
 });
 
@@ -101,6 +101,11 @@ export const decisionBody = z.object({
   decision: z.enum(['approve', 'return']),
   comment: z.string().max(5000).default(''),
   password: z.string().max(128).optional(),
+  waiver: z.string().max(2000).optional().describe('why you approve a version whose evidence is below the policy (required then)'),
+}).strict();
+export const evidencePolicyBody = z.object({
+  minimumIndependent: z.number().int().min(0).max(50),
+  minimumKinds: z.number().int().min(0).max(8),
 }).strict();
 export const withdrawBody = z.object({ reason: z.string().max(2000) }).strict();
 export const commentBody = z.object({ body: z.string().max(5000) }).strict();

@@ -17,6 +17,8 @@ export interface Definition {
   validity?: ValidityLimit[];
   references: Reference[];
   propertyBasis?: string;
+  /** The published accuracy of the correlation on its data, e.g. ±20 % (rel 0.2), with where it is stated. */
+  accuracy?: { rel: number; basis: string };
   notes?: string;
 }
 
@@ -102,7 +104,19 @@ export interface Reference {
 
 export type InputValue = number | { value: number; unit: string };
 
-export const SOURCE_KINDS = ['published', 'numerical', 'common-practice', 'memory'] as const;
+/**
+ * Where a check case's expected value comes from (what the evidence is):
+ * - published: a handbook, paper or standard, with a locator (table, equation, figure, page, example);
+ * - independent-solution: the physics solved another way in validation/reference (similarity ODE,
+ *   eigenvalue problem, root-find of a different equation, quadrature of a local law);
+ * - standard-formulation: a published standard computed by a general-purpose library (e.g. IAPWS);
+ * - cross-check: another correlation, with a tolerance from the two correlations' stated accuracies;
+ * - limit: a limiting case, derived in the note;
+ * - transcription: the formula re-typed — catches typos, counts for nothing;
+ * - memory: a value recalled, not looked up (counts, flagged);
+ * - common-practice: a fact of the trade, no source.
+ */
+export const SOURCE_KINDS = ['published', 'independent-solution', 'standard-formulation', 'cross-check', 'limit', 'transcription', 'memory', 'common-practice'] as const;
 export type SourceKind = (typeof SOURCE_KINDS)[number];
 
 export interface CheckCase {

@@ -5,13 +5,14 @@ import { compiled, EvaluationError, InputError, MAX_ROW_COST, rowCostOf, SOLVE_I
 import { compileChain, type Resolve } from './chain';
 import type { CheckCase, Definition, InputDef, Warning } from './types';
 import type { TemplateDefinition } from './template-types';
+import { DEFAULT_POLICY, evidenceOf, type Evidence, type EvidencePolicy } from './evidence';
 import { isLogRange } from './ranges';
 
 /** What running check cases needs of an evaluator: a compiled correlation or a compiled chain. */
 type Evaluator = Pick<CompiledDefinition, 'outputSymbols' | 'limits' | 'evaluate' | 'readInputs'> & { definition: { inputs: InputDef[] } };
 
 export const ENGINE_VERSION = '1.0.0';
-export const REPORT_FORMAT = 1;
+export const REPORT_FORMAT = 2;
 
 export interface CaseResult {
   index: number;
@@ -43,6 +44,8 @@ export interface ValidationReport {
   stages: { stage: Stage; passed: boolean; issues: DefinitionIssue[] }[];
   cases: CaseResult[];
   coverage: { entries: CoverageEntry[]; oneCorner: boolean; message: string };
+  /** What the check cases prove (see lib/engine/evidence.ts); absent when validation stopped early. */
+  evidence?: Evidence;
   summary: { checkCases: number; passed: number; failed: number; inRange: number; outOfRange: number; bySource: Record<string, number> };
 }
 
@@ -129,13 +132,13 @@ function coverageOf(c: Evaluator, cases: CheckCase[], results: CaseResult[]): Va
 
 type Compile = (definition: unknown, add: (issues: DefinitionIssue[]) => void, passed: (s: Stage) => boolean) => Evaluator | null;
 
-function validateWith(definition: unknown, checkCases: unknown[], schemaIssues: (d: unknown) => { pointer: string; message: string }[], compile: Compile): ValidationReport {
+function validateWith(definition: unknown, checkCases: unknown[], schemaIssues: (d: unknown) => { pointer: string; message: string }[], compile: Compile, policy: EvidencePolicy): ValidationReport {
   const stages: ValidationReport['stages'] = ORDER.map((stage) => ({ stage, passed: true, issues: [] }));
   const stage = (s: Stage) => stages.find((x) => x.stage === s)!;
   const add = (issues: DefinitionIssue[]) => {
     for (const i of issues) { stage(i.stage).issues.push(i); stage(i.stage).passed = false; }
   };
-  const report = (cases: CaseResult[] = [], coverage?: ValidationReport['coverage']): ValidationReport => {
+  const report = (cases: CaseResult[] = [], coverage?: ValidationReport['coverage'], evidence?: Evidence): ValidationReport => {
     const bySource: Record<string, number> = {};
     for (const c of cases) bySource[c.sourceKind] = (bySource[c.sourceKind] ?? 0) + 1;
     const outOfRange = cases.filter((c) => c.expectedWarnings.length > 0).length;
@@ -143,6 +146,7 @@ function validateWith(definition: unknown, checkCases: unknown[], schemaIssues: 
     return {
       engineVersion: ENGINE_VERSION, reportFormat: REPORT_FORMAT, passed: staticPassed, stages, cases,
       coverage: coverage ?? { entries: [], oneCorner: false, message: 'not reached' },
+      ...(evidence ? { evidence } : {}),
       summary: { checkCases: cases.length, passed: cases.filter((c) => c.passed).length, failed: cases.filter((c) => !c.passed).length, inRange: cases.length - outOfRange, outOfRange, bySource },
     };
   };
@@ -174,7 +178,8 @@ function validateWith(definition: unknown, checkCases: unknown[], schemaIssues: 
     stage('coverage').passed = false;
     stage('coverage').issues.push({ stage: 'coverage', pointer: '/checkCases', message: coverage.message });
   }
-  return report(cases, coverage);
+  const evidence = evidenceOf({ definition: definition as Pick<Definition, 'accuracy'>, checkCases: checkCases as CheckCase[], passed: cases.map((r) => r.passed), coverage: coverage.entries, policy });
+  return report(cases, coverage, evidence);
 }
 
 /**
@@ -182,7 +187,7 @@ function validateWith(definition: unknown, checkCases: unknown[], schemaIssues: 
  * dimensions → every check case → coverage. Stops compiling at the first failing static stage but
  * always reports what it found.
  */
-export function validateVersion(definition: unknown, checkCases: unknown[]): ValidationReport {
+export function validateVersion(definition: unknown, checkCases: unknown[], policy: EvidencePolicy = DEFAULT_POLICY): ValidationReport {
   return validateWith(definition, checkCases, checkDefinitionSchema, (d, add, passed) => {
     const def = d as Definition;
     const { analysed, issues } = analyseDefinition(def);
@@ -195,7 +200,7 @@ export function validateVersion(definition: unknown, checkCases: unknown[]): Val
     }
     if (!passed('dimensions') || !passed('expressions')) return null;
     return compiled(def);
-  });
+  }, policy);
 }
 
 /**
@@ -203,7 +208,7 @@ export function validateVersion(definition: unknown, checkCases: unknown[]): Val
  * pinned correlation versions (each must exist, be approved and match its content hash: `resolve`
  * says so) and "dimensions" every binding between steps. Check cases run through the whole chain.
  */
-export function validateTemplate(definition: unknown, checkCases: unknown[], resolve: Resolve): ValidationReport {
+export function validateTemplate(definition: unknown, checkCases: unknown[], resolve: Resolve, policy: EvidencePolicy = DEFAULT_POLICY): ValidationReport {
   return validateWith(definition, checkCases, checkTemplateSchema, (d, add) => {
     try {
       return compileChain(d as TemplateDefinition, resolve);
@@ -212,5 +217,5 @@ export function validateTemplate(definition: unknown, checkCases: unknown[], res
       add(err.issues);
       return null;
     }
-  });
+  }, policy);
 }

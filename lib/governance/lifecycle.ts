@@ -19,6 +19,8 @@ import { assertIntact } from './integrity';
 import { usesOfVersion, peopleToTell } from './uses';
 import { checkCasesOfVersion } from './check-cases';
 import { loadPinnedVersions } from './servable';
+import { evidencePolicy } from './policy';
+import { meetsPolicy } from '@/lib/engine/evidence';
 import { PUBLISHED } from './access';
 
 export const SLUG_PATTERN = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
@@ -85,7 +87,7 @@ const kindOf = (definition: unknown): EntryKind => (isTemplateDefinition(definit
  * are loaded and integrity-checked first; each must exist, be approved and match its hash.
  */
 export async function validateContent({ kind, definition, checkCases, transaction }: { kind: EntryKind; definition: unknown; checkCases: unknown[]; transaction?: Transaction }): Promise<ValidationReport> {
-  if (kind === 'correlation') return validateVersion(definition, checkCases);
+  if (kind === 'correlation') return validateVersion(definition, checkCases, await evidencePolicy());
   const pins = checkTemplateSchema(definition).length ? [] : pinsOf(definition as TemplateDefinition);
   const { resolve } = await resolvePins(pins, { forApproval: true, transaction });
   return validateTemplate(definition, checkCases, resolve);
@@ -230,7 +232,7 @@ export async function submitVersion({ actor, slug, version }: { actor: AuthUser;
       throw new AppError('invalid:validation-failed', `Validation failed (${problems.length} problem${problems.length === 1 ? '' : 's'}); fix them before submitting.`, { report, issues: problems.map((p) => ({ path: p.pointer, message: p.message })) });
     }
     const hash = contentHash(v.definition, checkCases);
-    await v.update({ status: 'in_review', contentHash: hash, submittedAt: new Date() }, { transaction });
+    await v.update({ status: 'in_review', contentHash: hash, submittedAt: new Date(), evidenceGrade: report.evidence?.grade ?? null }, { transaction });
     await ValidationRun.create({ versionId: v.id, engineVersion: report.engineVersion, passed: true, report }, { transaction });
     if (c.kind === 'template') await recordDependencies(v.id, v.definition as TemplateDefinition, transaction);
     await appendAuditEvent({ transaction, event: { actorId: actor.id, action: 'version.submitted', entityType: 'version', entityId: `${slug}@${version}`, afterHash: hash, details: { checkCases: checkCases.length, coverage: report.coverage.message } } });
@@ -251,8 +253,10 @@ export async function submitVersion({ actor, slug, version }: { actor: AuthUser;
  * password again and records the meaning of the signature; it supersedes the previously approved
  * version in the same transaction. Row locks make concurrent decisions land exactly once.
  */
-export async function decideVersion({ actor, slug, version, decision, comment, password }: {
+export async function decideVersion({ actor, slug, version, decision, comment, password, waiver }: {
   actor: AuthUser; slug: string; version: number; decision: 'approve' | 'return'; comment: string; password?: string;
+  /** Why the approver signs a version whose evidence is below the policy (required then, at least 20 characters). */
+  waiver?: string;
 }) {
   requireRole(actor, 'approver');
   if (decision === 'approve') {
@@ -279,6 +283,14 @@ export async function decideVersion({ actor, slug, version, decision, comment, p
     const run = await ValidationRun.findOne({ where: { versionId: v.id }, order: [['id', 'DESC']], transaction });
     if (!run?.passed) throw new AppError('conflict:validation-failed', 'This version has no passing validation run and cannot be approved.');
     if (decision === 'approve' && c.kind === 'template') await assertPinsApproved(v.definition as TemplateDefinition, transaction);
+    // The evidence policy in force now decides, on the counts the validation found.
+    const evidence = (run.report as ValidationReport).evidence;
+    const policy = await evidencePolicy();
+    const belowPolicy = decision === 'approve' && c.kind === 'correlation' && (!evidence || !meetsPolicy(evidence, policy));
+    const waived = belowPolicy ? (waiver ?? '').trim() : '';
+    if (belowPolicy && waived.length < 20) {
+      throw new AppError('conflict:evidence-below-policy', `The evidence is below the approval policy (${policy.minimumIndependent} independent in-range checks of ${policy.minimumKinds} kinds; this version has ${evidence?.independent ?? 0} of ${evidence?.kinds ?? 0}). Sign it only with a waiver that says why (at least 20 characters).`, { issues: [{ path: 'waiver', message: 'A waiver with its reason is needed to approve below the evidence policy' }], evidence, policy });
+    }
     const now = new Date();
     const author = await User.findByPk(v.authorId, { transaction });
     let superseded: number | null = null;
@@ -293,11 +305,11 @@ export async function decideVersion({ actor, slug, version, decision, comment, p
     } else {
       await v.update({ status: 'returned', returnedAt: now }, { transaction });
     }
-    await SignOff.create({ versionId: v.id, userId: actor.id, decision: decision === 'approve' ? 'approved' : 'returned', comment: comment.trim(), meaning: decision === 'approve' ? MEANING_OF_APPROVAL : MEANING_OF_RETURN, contentHash: v.contentHash }, { transaction });
+    await SignOff.create({ versionId: v.id, userId: actor.id, decision: decision === 'approve' ? 'approved' : 'returned', comment: comment.trim(), meaning: decision === 'approve' ? MEANING_OF_APPROVAL : MEANING_OF_RETURN, contentHash: v.contentHash, waiver: waived || null }, { transaction });
     if (comment.trim()) await VersionComment.create({ versionId: v.id, userId: actor.id, body: comment.trim() }, { transaction });
     await appendAuditEvent({ transaction, event: {
       actorId: actor.id, action: decision === 'approve' ? 'version.approved' : 'version.returned', entityType: 'version', entityId: `${slug}@${version}`,
-      beforeHash: v.contentHash, afterHash: v.contentHash, details: { comment: comment.trim(), meaning: decision === 'approve' ? MEANING_OF_APPROVAL : MEANING_OF_RETURN, superseded },
+      beforeHash: v.contentHash, afterHash: v.contentHash, details: { comment: comment.trim(), meaning: decision === 'approve' ? MEANING_OF_APPROVAL : MEANING_OF_RETURN, superseded, ...(waived ? { waiver: waived, evidence: { independent: evidence?.independent ?? 0, kinds: evidence?.kinds ?? 0, policy } } : {}) },
     } });
     if (author) {
       await enqueueMail({ transaction, messages: [{

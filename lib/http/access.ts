@@ -66,6 +66,8 @@ export const ACCESS = {
   'PATCH /api/admin/users/{id}': { roles: ['admin'] },
   'GET /api/admin/audit': { roles: ['admin'] },
   'GET /api/admin/mail': { roles: ['admin'] },
+  'GET /api/admin/evidence-policy': { scope: 'read' },
+  'PUT /api/admin/evidence-policy': { roles: ['admin'] },
 } as const satisfies Record<string, AccessRule>;
 
 export type RouteKey = keyof typeof ACCESS;

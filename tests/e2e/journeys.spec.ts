@@ -71,6 +71,9 @@ test('an approver reviews the diff and deviation chart and approves with the pas
   await signOff.getByRole('button', { name: 'Approve and sign' }).click();
   await expect(signOff.getByRole('alert')).toContainText('password is not correct');
   await signOff.getByLabel('Comment (required when returning)').fill('Recalibration certificate attached; values agree with the rerun.');
+  // The in-house rig data are one kind of evidence: below the approval policy, so the signature carries a waiver.
+  await expect(page.getByTestId('evidence-summary')).toContainText('Evidence: thin');
+  await signOff.getByLabel(/Waiver: why you approve below the evidence policy/).fill('In-house fit of our own louvre; the only data that exist are the recalibrated rig runs.');
   await signOff.getByLabel('Your password, to sign').fill(DEMO_PASSWORD);
   await signOff.getByRole('button', { name: 'Approve and sign' }).click();
   await expect(page).toHaveURL(/\/correlations\/brightwater-louvre-pressure-loss\/versions\/2/);

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { call, DEMO_PASSWORD, signIn } from '../support/http';
-import { freshUser, plateCases, plateDefinition } from '../support/fixtures';
+import { freshUser, plateCases, plateDefinition, FIXTURE_WAIVER } from '../support/fixtures';
 import { QueryTypes } from 'sequelize';
 import { db } from '@/models';
 import { closeSequelize } from '@/lib/db/connection';
@@ -180,7 +180,7 @@ describe('calculations: templates, saved records, parametric runs and withdrawal
     expect((await call('/api/correlations', { cookie: author.cookie, body: { slug, definition: plateDefinition(0.332), checkCases: plateCases(0.332) } })).status).toBe(200);
     const approve = async (n: number) => {
       expect((await call(`/api/correlations/${slug}/versions/${n}/submit`, { cookie: author.cookie, method: 'POST' })).status).toBe(200);
-      expect((await call(`/api/correlations/${slug}/versions/${n}/decision`, { cookie: approver, body: { decision: 'approve', comment: 'ok', password: DEMO_PASSWORD } })).status).toBe(200);
+      expect((await call(`/api/correlations/${slug}/versions/${n}/decision`, { cookie: approver, body: { decision: 'approve', waiver: FIXTURE_WAIVER, comment: 'ok', password: DEMO_PASSWORD } })).status).toBe(200);
     };
     await approve(1);
     const hashOf = async (n: number) => (await call(`/api/correlations/${slug}/versions/${n}`, { cookie: engineer.cookie })).body.contentHash as string;
@@ -235,7 +235,7 @@ describe('calculations: templates, saved records, parametric runs and withdrawal
     const cases = [300, 400, 500].map((T) => ({ label: `T_s = ${T} K`, inputs: { T_s: T, T_inf: 300 }, expected: { T_f: (T + 300) / 2 }, tolerance: { rel: 1e-12, why: 'arithmetic mean' }, source: { kind: 'common-practice', citation: 'definition of the film temperature' } }));
     expect((await call('/api/correlations', { cookie: author.cookie, body: { slug, definition: def, checkCases: cases } })).status).toBe(200);
     expect((await call(`/api/correlations/${slug}/versions/1/submit`, { cookie: author.cookie, method: 'POST' })).status).toBe(200);
-    expect((await call(`/api/correlations/${slug}/versions/1/decision`, { cookie: author.cookie, body: { decision: 'approve', comment: '', password: author.password } })).body.error.code).toBe('forbidden:role');
+    expect((await call(`/api/correlations/${slug}/versions/1/decision`, { cookie: author.cookie, body: { decision: 'approve', waiver: FIXTURE_WAIVER, comment: '', password: author.password } })).body.error.code).toBe('forbidden:role');
     // Not listed as a correlation, listed as a template.
     expect((await call(`/api/correlations?q=${slug}`, { cookie: author.cookie })).body.total).toBe(0);
     const wrong = await call('/api/correlations', { cookie: author.cookie, body: { slug: `${slug}-b`, definition: { ...def, steps: [{ ...def.steps[0], use: { ...def.steps[0].use, contentHash: 'a'.repeat(64) } }] }, checkCases: cases } });

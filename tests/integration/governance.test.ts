@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { execFileSync } from 'node:child_process';
 import { QueryTypes } from 'sequelize';
 import { call, DEMO_PASSWORD, signIn } from '../support/http';
-import { freshUser, plateCases, plateDefinition } from '../support/fixtures';
+import { freshUser, plateCases, plateDefinition, FIXTURE_WAIVER } from '../support/fixtures';
 import { db } from '@/models';
 import { closeSequelize } from '@/lib/db/connection';
 import { verifyAuditChain } from '@/lib/audit/log';
@@ -93,15 +93,15 @@ describe('governance life cycle over HTTP against MariaDB', () => {
 
   it('refuses sign-off with a wrong password and by an engineer, changing nothing', async () => {
     const before = await snapshot(slug);
-    const wrong = await call(`/api/correlations/${slug}/versions/1/decision`, { cookie: approver, body: { decision: 'approve', comment: 'ok', password: 'wrong-password' } });
+    const wrong = await call(`/api/correlations/${slug}/versions/1/decision`, { cookie: approver, body: { decision: 'approve', waiver: FIXTURE_WAIVER, comment: 'ok', password: 'wrong-password' } });
     expect(wrong.status).toBe(422);
     expect(wrong.body.error.code).toBe('invalid:password');
-    expect((await call(`/api/correlations/${slug}/versions/1/decision`, { cookie: engineer, body: { decision: 'approve', comment: 'ok', password: DEMO_PASSWORD } })).status).toBe(403);
+    expect((await call(`/api/correlations/${slug}/versions/1/decision`, { cookie: engineer, body: { decision: 'approve', waiver: FIXTURE_WAIVER, comment: 'ok', password: DEMO_PASSWORD } })).status).toBe(403);
     expect(await snapshot(slug)).toEqual(before);
   });
 
   it('lets exactly one of two simultaneous approvals land; the other gets 409', async () => {
-    const [a, b] = await Promise.all([approver, approver2].map((cookie) => call(`/api/correlations/${slug}/versions/1/decision`, { cookie, body: { decision: 'approve', comment: 'Reviewed.', password: DEMO_PASSWORD } })));
+    const [a, b] = await Promise.all([approver, approver2].map((cookie) => call(`/api/correlations/${slug}/versions/1/decision`, { cookie, body: { decision: 'approve', waiver: FIXTURE_WAIVER, comment: 'Reviewed.', password: DEMO_PASSWORD } })));
     expect([a.status, b.status].sort()).toEqual([200, 409]);
     expect([a, b].find((r) => r.status === 409)!.body.error.code).toBe('conflict:version-state');
     const detail = await call(`/api/correlations/${slug}/versions/1`, { cookie: engineer });
@@ -116,7 +116,7 @@ describe('governance life cycle over HTTP against MariaDB', () => {
     await call('/api/correlations', { cookie: dual.cookie, body: { slug: own, definition: plateDefinition(), checkCases: plateCases() } });
     await call(`/api/correlations/${own}/versions/1/submit`, { cookie: dual.cookie, method: 'POST' });
     const before = await snapshot(own);
-    const res = await call(`/api/correlations/${own}/versions/1/decision`, { cookie: dual.cookie, body: { decision: 'approve', comment: 'mine', password: dual.password } });
+    const res = await call(`/api/correlations/${own}/versions/1/decision`, { cookie: dual.cookie, body: { decision: 'approve', waiver: FIXTURE_WAIVER, comment: 'mine', password: dual.password } });
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('forbidden:approve-own-version');
     expect(await snapshot(own)).toEqual(before);
@@ -145,7 +145,7 @@ describe('governance life cycle over HTTP against MariaDB', () => {
   it('supersedes the approved version when a newer one is approved, keeping exactly one approved', async () => {
     await call(`/api/correlations/${slug}/versions/${authorsDraft}`, { cookie: author.cookie, method: 'PATCH', body: { definition: plateDefinition(0.3321), checkCases: plateCases(0.3321) } });
     await call(`/api/correlations/${slug}/versions/${authorsDraft}/submit`, { cookie: author.cookie, method: 'POST' });
-    expect((await call(`/api/correlations/${slug}/versions/${authorsDraft}/decision`, { cookie: approver, body: { decision: 'approve', comment: 'ok', password: DEMO_PASSWORD } })).status).toBe(200);
+    expect((await call(`/api/correlations/${slug}/versions/${authorsDraft}/decision`, { cookie: approver, body: { decision: 'approve', waiver: FIXTURE_WAIVER, comment: 'ok', password: DEMO_PASSWORD } })).status).toBe(200);
     const c = await call(`/api/correlations/${slug}`, { cookie: approver });
     expect(c.body.latestApprovedVersion).toBe(authorsDraft);
     const statuses = Object.fromEntries(c.body.versions.map((v: { version: number; status: string }) => [v.version, v.status]));
@@ -171,7 +171,7 @@ describe('governance life cycle over HTTP against MariaDB', () => {
     expect(pinned.status).toBe(200);
     expect(pinned.body.warnings[0]).toMatchObject({ symbol: 'version', value: authorsDraft });
     expect(pinned.body.warnings[0].message).toMatch(/withdrawn/);
-    const again = await call(`/api/correlations/${slug}/versions/${authorsDraft}/decision`, { cookie: approver, body: { decision: 'approve', comment: 'x', password: DEMO_PASSWORD } });
+    const again = await call(`/api/correlations/${slug}/versions/${authorsDraft}/decision`, { cookie: approver, body: { decision: 'approve', waiver: FIXTURE_WAIVER, comment: 'x', password: DEMO_PASSWORD } });
     expect(again.status).toBe(409);
   });
 
@@ -179,7 +179,7 @@ describe('governance life cycle over HTTP against MariaDB', () => {
     const tamper = `test-tamper-${Date.now()}`;
     await call('/api/correlations', { cookie: author.cookie, body: { slug: tamper, definition: plateDefinition(), checkCases: plateCases() } });
     await call(`/api/correlations/${tamper}/versions/1/submit`, { cookie: author.cookie, method: 'POST' });
-    await call(`/api/correlations/${tamper}/versions/1/decision`, { cookie: approver, body: { decision: 'approve', comment: 'ok', password: DEMO_PASSWORD } });
+    await call(`/api/correlations/${tamper}/versions/1/decision`, { cookie: approver, body: { decision: 'approve', waiver: FIXTURE_WAIVER, comment: 'ok', password: DEMO_PASSWORD } });
     const { sequelize } = db();
     await sequelize.query(`UPDATE correlation_versions v JOIN correlations c ON c.id = v.correlation_id
       SET v.definition = REPLACE(v.definition, '0.332 *', '0.532 *') WHERE c.slug = ?`, { replacements: [tamper], type: QueryTypes.UPDATE });

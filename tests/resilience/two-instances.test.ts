@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { spawn, type ChildProcess } from 'node:child_process';
 import { BASE, call, DEMO_PASSWORD, signIn } from '../support/http';
-import { freshUser, plateCases, plateDefinition } from '../support/fixtures';
+import { freshUser, plateCases, plateDefinition, FIXTURE_WAIVER } from '../support/fixtures';
 import { db } from '@/models';
 import { closeSequelize } from '@/lib/db/connection';
 import { createApiToken, revokeApiToken } from '@/lib/api/tokens';
@@ -37,7 +37,7 @@ describe('two app instances behind one database keep every rule', () => {
     expect((await call(`/api/correlations/${slug}/versions/1/submit`, { cookie: author.cookie, method: 'POST' })).status).toBe(200);
     const a1 = (await signIn('approver@demo.example')).cookie!;
     const a2 = (await signIn('approver2@demo.example')).cookie!; // a session signed by one instance works on both (one secret)
-    const decision = { decision: 'approve', comment: 'race', password: DEMO_PASSWORD };
+    const decision = { decision: 'approve', waiver: FIXTURE_WAIVER, comment: 'race', password: DEMO_PASSWORD };
     const [r1, r2] = await Promise.all([one(`/api/correlations/${slug}/versions/1/decision`, { cookie: a1, body: decision }), two(`/api/correlations/${slug}/versions/1/decision`, { cookie: a2, body: decision })]);
     expect([r1.status, r2.status].sort()).toEqual([200, 409]);
     const c = await db().Correlation.findOne({ where: { slug } });
@@ -68,7 +68,7 @@ describe('two app instances behind one database keep every rule', () => {
     await call('/api/correlations', { cookie: author.cookie, body: { slug, definition: plateDefinition(), checkCases: plateCases() } });
     await call(`/api/correlations/${slug}/versions/1/submit`, { cookie: author.cookie, method: 'POST' });
     const approver = (await signIn('approver@demo.example')).cookie!;
-    expect((await call(`/api/correlations/${slug}/versions/1/decision`, { cookie: approver, body: { decision: 'approve', comment: 'ok', password: DEMO_PASSWORD } })).status).toBe(200);
+    expect((await call(`/api/correlations/${slug}/versions/1/decision`, { cookie: approver, body: { decision: 'approve', waiver: FIXTURE_WAIVER, comment: 'ok', password: DEMO_PASSWORD } })).status).toBe(200);
     const body = { inputs: { Re_x: 1e4, Pr: 0.7 } };
     expect((await two(`/api/correlations/${slug}/evaluate`, { token, body })).status).toBe(200);
     expect((await one(`/api/correlations/${slug}/versions/1/withdraw`, { cookie: approver, body: { reason: 'withdrawn in the two-instance test' } })).status).toBe(200);

@@ -12,6 +12,9 @@ export async function freshUser(roles: Role[], tag: string): Promise<{ user: Aut
   return { user, cookie, password };
 }
 
+/** Test correlations are synthetic laws with no outside evidence: their approval carries this waiver. */
+export const FIXTURE_WAIVER = 'test fixture: a synthetic law with no external evidence';
+
 /** A small, valid definition: a laminar flat-plate local Nusselt number with a coefficient to vary. */
 export function plateDefinition(coefficient = 0.332) {
   return {

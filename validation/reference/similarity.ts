@@ -67,7 +67,7 @@ function fAt(i: number): number {
  * Pohlhausen, isothermal wall: Nu_x/Re_x^½ = 1 / ∫₀^∞ exp(−(Pr/2) ∫₀^η f dη') dη (trapezoidal rule).
  * The integral runs far enough for small Pr, whose thermal layer is much thicker than the velocity layer.
  */
-export function pohlhausenNusseltCoefficient(pr: number): number {
+function pohlhausenNusseltCoefficientSolved(pr: number): number {
   const etaMax = Math.max(ETA_MAX, Math.sqrt(80 / pr) + 4);
   let inner = 0;
   let outer = 0;
@@ -82,7 +82,7 @@ export function pohlhausenNusseltCoefficient(pr: number): number {
 }
 
 /** η where the isothermal-wall temperature profile reaches 99 % of the free-stream difference. */
-export function thermalThicknessEta(pr: number): number {
+function thermalThicknessEtaSolved(pr: number): number {
   const etaMax = Math.max(ETA_MAX, Math.sqrt(80 / pr) + 4);
   const w: number[] = [1];
   let inner = 0;
@@ -104,7 +104,7 @@ export function thermalThicknessEta(pr: number): number {
  * θ(∞) = 0; Nu_x/Re_x^½ = −θ'(0). n = ½ is the uniform-heat-flux plate (q ∝ x^(n−½)). The equation is
  * linear, so two trial integrations give the slope exactly.
  */
-export function powerLawWallNusseltCoefficient(pr: number, n: number): number {
+function powerLawWallNusseltCoefficientSolved(pr: number, n: number): number {
   const { profile } = blasius();
   const etaMax = Math.min(ETA_MAX, Math.max(8, 12 / Math.sqrt(pr)));
   const run = (slope: number) => {
@@ -172,7 +172,7 @@ export function graetzNusseltUWT(): number {
  * Returns g(Pr) = −H'(0), so Nu_x = g (Gr_x/4)^¼ and Nu_L = (4/3) g (Gr_L/4)^¼. Newton iteration on
  * (F''(0), H'(0)) with RK4 integration to η = 8, continued in Pr from Pr = 1; used for 0.7 ≤ Pr ≤ 1 (gases).
  */
-export function ostrachG(pr: number): number {
+function ostrachGSolved(pr: number): number {
   const etaMax = 8;
   const h = 0.002;
   let a = 0.64;
@@ -212,4 +212,30 @@ export function ostrachG(pr: number): number {
   const steps = Math.max(1, Math.ceil(Math.abs(Math.log(pr)) / Math.log(1.5)));
   for (let k = 1; k <= steps; k++) solveAt(Math.exp((Math.log(pr) * k) / steps));
   return -b;
+}
+
+/** The Prandtl-number solutions are solved once per Pr: the circularity test asks for the same Pr many times. */
+function memoByPr(solve: (pr: number) => number): (pr: number) => number {
+  const cache = new Map<number, number | Error>();
+  return (pr) => {
+    let v = cache.get(pr);
+    if (v === undefined) {
+      try { v = solve(pr); } catch (err) { v = err as Error; }
+      if (cache.size > 1000) cache.clear();
+      cache.set(pr, v);
+    }
+    if (v instanceof Error) throw v;
+    return v;
+  };
+}
+
+export const pohlhausenNusseltCoefficient = memoByPr(pohlhausenNusseltCoefficientSolved);
+export const thermalThicknessEta = memoByPr(thermalThicknessEtaSolved);
+export const ostrachG = memoByPr(ostrachGSolved);
+const powerLawByExponent = new Map<number, (pr: number) => number>();
+/** Nusselt coefficient for a wall temperature rising as x^n (n = ½: uniform heat flux), solved once per (Pr, n). */
+export function powerLawWallNusseltCoefficient(pr: number, n: number): number {
+  let f = powerLawByExponent.get(n);
+  if (!f) { f = memoByPr((p) => powerLawWallNusseltCoefficientSolved(p, n)); powerLawByExponent.set(n, f); }
+  return f(pr);
 }
