@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { CATEGORIES, SOURCE_KINDS } from '@/lib/engine/types';
+import { GRADES } from '@/lib/engine/evidence';
 import { VERSION_STATUSES } from '@/models/correlation';
 
 /**
@@ -17,6 +18,7 @@ export const listQuery = z.object({
   q: z.string().max(100).optional(),
   category: z.enum(CATEGORIES).optional(),
   situation: z.string().max(120).optional(),
+  grade: z.enum(GRADES).optional().describe('evidence grade of the approved version'),
   status: z.enum([...VERSION_STATUSES, 'any']).optional(),
   sort: z.enum(['title', 'category', 'updated', 'slug']).optional(),
   dir: z.enum(['asc', 'desc']).optional(),
@@ -54,6 +56,7 @@ export const listAnswer = z.object({
     slug: z.string(), title: z.string(), category: z.string(), situation: z.string(), tags: z.array(z.string()),
     latestApprovedVersion: z.number().int().nullable(), latestVersion: z.number().int(), latestStatus: z.enum(VERSION_STATUSES),
     validity: z.string(), approvedAt: z.string().nullable(), updatedAt: z.string(),
+    evidenceGrade: z.enum(GRADES).nullable().describe('evidence grade of the approved version (lib/engine/evidence.ts)'),
   })),
   total: z.number().int(), page: z.number().int(), pageSize: z.number().int(),
 });
@@ -62,7 +65,7 @@ export const correlationAnswer = z.object({
   slug: z.string(), title: z.string(), category: z.string(), situation: z.string(), tags: z.array(z.string()),
   latestApprovedVersion: z.number().int().nullable(),
   versions: z.array(z.object({
-    version: z.number().int(), status: z.enum(VERSION_STATUSES), contentHash: z.string().nullable(), author: z.string(),
+    version: z.number().int(), status: z.enum(VERSION_STATUSES), contentHash: z.string().nullable(), evidenceGrade: z.enum(GRADES).nullable(), author: z.string(),
     approvedAt: z.string().optional(), withdrawnAt: z.string().optional(), withdrawnReason: z.string().nullable().optional(),
   })),
 });
@@ -79,6 +82,12 @@ export const versionAnswer = z.object({
   definition: z.record(z.string(), z.unknown()).describe('the definition, as validated by the definition JSON Schema'),
   checkCases: z.array(checkCaseShape),
   validation: z.record(z.string(), z.unknown()).nullable().describe('the validation report of the submitted version'),
+  evidence: z.object({
+    grade: z.enum(GRADES), meaning: z.string(), byKind: z.record(z.string(), z.number()), independent: z.number().int(), kinds: z.number().int(),
+    published: z.boolean(), coverage: z.number(), toleranceOverAccuracy: z.number().nullable(),
+    accuracy: z.object({ rel: z.number(), basis: z.string() }).nullable(),
+    policy: z.object({ minimumIndependent: z.number().int(), minimumKinds: z.number().int() }), meetsPolicy: z.boolean(),
+  }).nullable().describe('what the check cases prove: in-range passing cases by kind, coverage, the grade and the policy'),
 });
 
 export const errorAnswer = z.object({

@@ -16,6 +16,7 @@ export interface ListQuery {
   category?: string;
   status?: VersionStatus | 'any';
   situation?: string;
+  grade?: 'well-founded' | 'adequate' | 'thin';
   sort?: 'title' | 'category' | 'updated' | 'slug';
   dir?: 'asc' | 'desc';
   page: number;
@@ -40,6 +41,10 @@ export async function listCorrelations({ actor, query, kind = 'correlation' }: {
   }
   if (query.category) { where.push('c.category = :category'); repl.category = query.category; }
   if (query.situation) { where.push('c.situation = :situation'); repl.situation = query.situation; }
+  if (query.grade) {
+    where.push("EXISTS (SELECT 1 FROM correlation_versions g WHERE g.correlation_id = c.id AND g.status = 'approved' AND g.evidence_grade = :grade)");
+    repl.grade = query.grade;
+  }
   if (query.status && query.status !== 'any') {
     where.push(`EXISTS (SELECT 1 FROM correlation_versions v WHERE v.correlation_id = c.id AND v.status = :status AND ${visible})`);
     repl.status = query.status;
@@ -49,10 +54,10 @@ export async function listCorrelations({ actor, query, kind = 'correlation' }: {
   const [{ total }] = await sequelize.query<{ total: number }>(`SELECT COUNT(*) AS total FROM correlations c WHERE ${whereSql}`, { replacements: repl, type: QueryTypes.SELECT });
   const rows = await sequelize.query<{
     id: number; slug: string; title: string; category: string; situation: string; tags: string; updated_at: Date;
-    approved_version: number | null; approved_definition: string | null; approved_at: Date | null; approved_hash: string | null; latest_version: number; latest_status: VersionStatus;
+    approved_version: number | null; approved_definition: string | null; approved_at: Date | null; approved_hash: string | null; approved_grade: string | null; latest_version: number; latest_status: VersionStatus;
   }>(`
     SELECT c.id, c.slug, c.title, c.category, c.situation, c.tags, c.updated_at,
-      a.version AS approved_version, a.definition AS approved_definition, a.approved_at, a.content_hash AS approved_hash,
+      a.version AS approved_version, a.definition AS approved_definition, a.approved_at, a.content_hash AS approved_hash, a.evidence_grade AS approved_grade,
       l.version AS latest_version, l.status AS latest_status
     FROM correlations c
     LEFT JOIN correlation_versions a ON a.correlation_id = c.id AND a.status = 'approved'
@@ -69,6 +74,7 @@ export async function listCorrelations({ actor, query, kind = 'correlation' }: {
       latestApprovedVersion: r.approved_version ?? null,
       approvedAt: r.approved_at ?? null,
       approvedContentHash: r.approved_hash ?? null,
+      evidenceGrade: r.approved_grade ?? null,
       latestVersion: r.latest_version, latestStatus: r.latest_status,
       validity: r.approved_definition && kind === 'correlation' ? validitySummary(JSON.parse(r.approved_definition) as Definition) : '',
       updatedAt: r.updated_at,
@@ -96,7 +102,7 @@ export async function getCorrelation({ actor, slug }: { actor: AuthUser | null; 
     slug: c.slug, kind: c.kind, title: c.title, category: c.category, situation: c.situation, tags: c.tags,
     latestApprovedVersion: approved?.version ?? null,
     versions: versions.map((v) => ({
-      version: v.version, status: v.status, contentHash: v.contentHash, author: users.get(v.authorId) ?? '?', authorId: v.authorId,
+      version: v.version, status: v.status, contentHash: v.contentHash, evidenceGrade: v.evidenceGrade ?? null, author: users.get(v.authorId) ?? '?', authorId: v.authorId,
       createdAt: v.createdAt, submittedAt: v.submittedAt, ...(v.approvedAt ? { approvedAt: v.approvedAt } : {}),
       ...(v.withdrawnAt ? { withdrawnAt: v.withdrawnAt, withdrawnReason: v.withdrawnReason } : {}),
     })),
@@ -139,8 +145,9 @@ export async function getVersionDetail({ actor, slug, version }: { actor: AuthUs
     createdAt: v.createdAt, submittedAt: v.submittedAt, approvedAt: v.approvedAt, withdrawnAt: v.withdrawnAt, withdrawnReason: v.withdrawnReason,
     definition, checkCases,
     validation: run ? (run.report as object) : null,
+    evidence: run ? ((run.report as { evidence?: object }).evidence ?? null) : null,
     tex: safeTex(definition, v.contentHash),
-    signOffs: signOffs.map((s) => ({ decision: s.decision, by: names.get(s.userId) ?? '?', at: s.createdAt, comment: s.comment, meaning: s.meaning, contentHash: s.contentHash })),
+    signOffs: signOffs.map((s) => ({ decision: s.decision, by: names.get(s.userId) ?? '?', at: s.createdAt, comment: s.comment, meaning: s.meaning, contentHash: s.contentHash, ...(s.waiver ? { waiver: s.waiver } : {}) })),
     comments: comments.map((c) => ({ by: names.get(c.userId) ?? '?', at: c.createdAt, body: c.body })),
   };
 }

@@ -8,7 +8,7 @@ import { StatusBadge } from '@/components/ui/status-badge';
 
 interface Item {
   slug: string; title: string; category: string; situation: string; latestApprovedVersion: number | null;
-  latestVersion: number; latestStatus: string; validity: string; updatedAt: string;
+  latestVersion: number; latestStatus: string; validity: string; updatedAt: string; evidenceGrade: string | null;
 }
 type SortKey = 'title' | 'category' | 'updated' | 'slug';
 
@@ -20,6 +20,7 @@ export function LibraryTable() {
   const [debounced, setDebounced] = useState('');
   const [category, setCategory] = useState('');
   const [status, setStatus] = useState('');
+  const [grade, setGrade] = useState('');
   const [sort, setSort] = useState<SortKey>('title');
   const [dir, setDir] = useState<'asc' | 'desc'>('asc');
   const [page, setPage] = useState(1);
@@ -28,6 +29,7 @@ export function LibraryTable() {
   const params = new URLSearchParams({ page: String(page), pageSize: String(PAGE_SIZE), sort, dir });
   if (debounced) params.set('q', debounced);
   if (category) params.set('category', category);
+  if (grade) params.set('grade', grade);
   if (status) params.set('status', status);
   const list = useQuery({ queryKey: ['library', params.toString()], queryFn: () => api<{ items: Item[]; total: number }>(`/api/correlations?${params}`), placeholderData: keepPreviousData });
 
@@ -61,16 +63,22 @@ export function LibraryTable() {
             {['approved', 'in_review', 'draft', 'returned', 'withdrawn', 'superseded'].map((s) => <option key={s} value={s}>{s.replace('_', ' ')}</option>)}
           </select>
         </label>
+        <label className="flex items-center gap-1 text-sm">Evidence
+          <select className="field-input w-auto" value={grade} onChange={(e) => { setGrade(e.target.value); setPage(1); }}>
+            <option value="">any grade</option>
+            {['well-founded', 'adequate', 'thin'].map((g) => <option key={g} value={g}>{g}</option>)}
+          </select>
+        </label>
       </div>
       {list.isError && <p role="alert" className="text-sm text-danger">Could not load the library: {list.error.message}</p>}
       <div className="overflow-x-auto">
         <table className="table-plain">
           <thead>
-            <tr>{header('title', 'Correlation')}<th>Situation</th>{header('category', 'Category')}<th>Approved</th><th>Validity</th>{header('updated', 'Updated')}</tr>
+            <tr>{header('title', 'Correlation')}<th>Situation</th>{header('category', 'Category')}<th>Approved</th><th>Evidence</th><th>Validity</th>{header('updated', 'Updated')}</tr>
           </thead>
           <tbody aria-busy={list.isFetching}>
-            {list.isPending && <tr><td colSpan={6} className="animate-pulse text-ink-faint">Loading…</td></tr>}
-            {list.data?.items.length === 0 && <tr><td colSpan={6} className="text-ink-faint">Nothing matches.</td></tr>}
+            {list.isPending && <tr><td colSpan={7} className="animate-pulse text-ink-faint">Loading…</td></tr>}
+            {list.data?.items.length === 0 && <tr><td colSpan={7} className="text-ink-faint">Nothing matches.</td></tr>}
             {list.data?.items.map((c) => (
               <tr key={c.slug} className="hover:bg-paper-sunk/60">
                 <td>
@@ -81,6 +89,7 @@ export function LibraryTable() {
                 <td>{c.category}</td>
                 <td>{c.latestApprovedVersion ? <span className="font-mono">v{c.latestApprovedVersion}</span> : <span className="text-ink-faint">none</span>}
                   {c.latestStatus !== 'approved' && <div className="mt-0.5"><StatusBadge status={c.latestStatus} /> <span className="text-xs text-ink-faint">v{c.latestVersion}</span></div>}</td>
+                <td className="text-xs" title="evidence grade of the approved version">{c.evidenceGrade ?? '—'}</td>
                 <td className="max-w-xs font-mono text-xs text-ink-soft">{c.validity || '—'}</td>
                 <td className="whitespace-nowrap text-xs text-ink-soft">{new Date(c.updatedAt).toISOString().slice(0, 10)}</td>
               </tr>
