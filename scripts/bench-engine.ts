@@ -3,7 +3,7 @@
 // time to validate a version with 1,000 check cases.
 import { evaluate } from 'mathjs';
 import { compiled, validateVersion, brent, type Definition } from '@/lib/engine';
-import { libraryHash, readLibrary, readTemplates } from '@/lib/governance/library';
+import { libraryHash, readLibrary, readTemplates, seededVersion } from '@/lib/governance/library';
 import { compileChain } from '@/lib/engine/chain';
 import { contentHash } from '@/lib/engine/canonical';
 import type { TemplateDefinition } from '@/lib/engine/template-types';
@@ -101,7 +101,7 @@ for (let i = 0; i < 3; i++) {
 const hashOf = libraryHash();
 const flatPlate = readTemplates(hashOf).find((t) => t.slug === 'flat-plate-forced-convection-air')!.definition as unknown as TemplateDefinition;
 const chain = compileChain(flatPlate, (pin) => {
-  const e = lib.get(pin.slug)!;
+  const e = seededVersion(pin.slug, pin.version)!;
   if (contentHash(e.definition, e.checkCases) !== pin.contentHash) return { problem: 'hash' };
   return compiled(e.definition as unknown as Definition);
 });

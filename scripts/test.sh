@@ -17,6 +17,16 @@ if [ ! -x /usr/bin/chromium ]; then
   fi
 fi
 
+# The property-table tests compare with the standard formulations through Debian's python3-iapws.
+if ! /usr/bin/python3 -c 'import iapws' 2>/dev/null; then
+  if [ "$(id -u)" = "0" ]; then
+    echo "Installing Debian's python3-iapws for the property-table tests…"
+    apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq python3-iapws >/dev/null
+  else
+    echo "The property-table tests need Debian's python3-iapws: sudo apt-get install -y python3-iapws" >&2; exit 1
+  fi
+fi
+
 DB_WAS_RUNNING=0
 bash scripts/db.sh status >/dev/null 2>&1 && DB_WAS_RUNNING=1
 bash scripts/db.sh start

@@ -1,6 +1,7 @@
 import * as demoUsers from './20261201000100-demo-users';
 import * as standardLibrary from './20261201000200-standard-library';
 import * as demoScenario from './20261201000300-demo-scenario';
+import * as propertyTables from './20261202000050-property-tables-from-standards';
 import * as templates from './20261202000100-calculation-templates';
 import * as demoCalculations from './20261202000200-demo-calculations';
 
@@ -11,4 +12,4 @@ export interface Seeder {
 }
 
 /** Seeders in order; tracked in their own table, so each runs once per database. */
-export const seeders: Seeder[] = [demoUsers, standardLibrary, demoScenario, templates, demoCalculations];
+export const seeders: Seeder[] = [demoUsers, standardLibrary, demoScenario, propertyTables, templates, demoCalculations];

@@ -23,15 +23,28 @@ export function readLibrary(dir = LIBRARY_DIR): LibraryEntry[] {
 }
 
 export const TEMPLATE_DIR = join(process.cwd(), 'seeders', 'templates');
+/** Second versions of property tables, generated from the standard formulations (scripts/property-tables.py). */
+export const PROPERTY_TABLE_DIR = join(process.cwd(), 'seeders', 'property-tables');
+
+/** The generated property tables that replace version 1 of their entries (published as version 2). */
+export function readPropertyTables(dir = PROPERTY_TABLE_DIR): LibraryEntry[] {
+  return readLibrary(dir);
+}
+
+/** The content a seeded version holds: version 1 from the library file, version 2 from a generated table. */
+export function seededVersion(slug: string, version: number, library = readLibrary(), tables = readPropertyTables()): LibraryEntry | undefined {
+  if (version === 1) return library.find((e) => e.slug === slug);
+  if (version === 2) return tables.find((e) => e.slug === slug);
+  return undefined;
+}
 
 type PinSource = (slug: string, version: number) => string;
 
-/** Content hash of a standard-library version as the seeder freezes it (version 1 of each file). */
-export function libraryHash(library = readLibrary()): PinSource {
-  const bySlug = new Map(library.map((e) => [e.slug, e]));
+/** Content hash of a standard-library version as the seeder freezes it (version 1, or 2 for a generated table). */
+export function libraryHash(library = readLibrary(), tables = readPropertyTables()): PinSource {
   return (slug, version) => {
-    const e = bySlug.get(slug);
-    if (!e || version !== 1) throw new Error(`no seeded version ${version} of "${slug}"`);
+    const e = seededVersion(slug, version, library, tables);
+    if (!e) throw new Error(`no seeded version ${version} of "${slug}"`);
     return contentHash(e.definition, e.checkCases);
   };
 }

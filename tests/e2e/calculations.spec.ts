@@ -20,15 +20,15 @@ test('an engineer runs the flat-plate template in °C and atm, sees a warning at
   await form.getByRole('button', { name: 'Run the calculation' }).click();
   await expect(form.getByText('"fast" is not a number')).toBeVisible();
   // A hot plate: the film temperature leaves the air table, and the warning appears at that step.
-  await set('T_inf', '600', 'degC');
-  await set('T_s', '900', 'degC');
+  await set('T_inf', '1100', 'degC');
+  await set('T_s', '1500', 'degC');
   await set('p', '1', 'atm');
   await set('u_inf', '3');
   await set('L', '0.4');
   await set('W', '0.3');
   await form.getByRole('button', { name: 'Run the calculation' }).click();
   const airStep = page.getByTestId('step-air-properties');
-  await expect(airStep.getByRole('alert')).toContainText('T = 1023.15 is above the maximum 1000');
+  await expect(airStep.getByRole('alert')).toContainText('T = 1573.15 is above the maximum 1500');
   await expect(page.getByTestId('step-reynolds').getByRole('alert')).toHaveCount(0);
   await expect(page.getByText(/1 range warning/)).toBeVisible();
   await page.screenshot({ path: 'test-results/journey-calc-warning-at-step.png', fullPage: true });

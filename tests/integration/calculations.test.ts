@@ -6,7 +6,7 @@ import { freshUser, plateCases, plateDefinition, FIXTURE_WAIVER } from '../suppo
 import { QueryTypes } from 'sequelize';
 import { db } from '@/models';
 import { closeSequelize } from '@/lib/db/connection';
-import { readLibrary } from '@/lib/governance/library';
+import { readPropertyTables } from '@/lib/governance/library';
 import { revisionHash } from '@/lib/calculations/records';
 
 const TEMPLATE = 'flat-plate-forced-convection-air';
@@ -18,11 +18,11 @@ const until = async (what: () => boolean, ms = 5000) => { const end = Date.now()
 const rel = (a: number, b: number) => Math.abs(a / b - 1);
 
 /**
- * The air rows the hand calculation reads: the governed table air-properties-1atm v1 (Incropera,
- * DeWitt, Bergman & Lavine, 6th ed., Table A.4, transcribed from memory — see its definition).
+ * The air rows the hand calculation reads: the governed table air-properties-1atm v2, generated from
+ * Lemmon et al. (2000) and Lemmon & Jacobsen (2004) at 101.325 kPa by scripts/property-tables.py.
  */
 function airRow(T: number) {
-  const air = readLibrary().find((e) => e.slug === 'air-properties-1atm')!.definition as { tables: { columns: { name: string; values: number[] }[] }[] };
+  const air = readPropertyTables().find((e) => e.slug === 'air-properties-1atm')!.definition as { tables: { columns: { name: string; values: number[] }[] }[] };
   const col = (n: string) => air.tables[0].columns.find((c) => c.name === n)!.values;
   const Ts = col('T');
   const i = Ts.findIndex((t, k) => T >= t && T <= Ts[k + 1]);
@@ -63,7 +63,7 @@ describe('calculations: templates, saved records, parametric runs and withdrawal
     // Hand calculation, step by step.
     const T_inf = 22 + 273.15; const T_s = 48 + 273.15; // K (ITS-90 offset, common practice)
     const T_f = (T_s + T_inf) / 2; // film temperature (Incropera et al. 2007, §7.1)
-    const air = airRow(T_f); // linear interpolation between the 300 K and 350 K rows
+    const air = airRow(T_f); // linear interpolation between the 300 K and 310 K rows
     const nu = air.nu * (101325 / 97000); // ideal gas: ν ∝ 1/p at fixed T (Bird, Stewart & Lightfoot 2002, ch. 1)
     const Re = (2.5 * 0.45) / nu;
     expect(Re).toBeLessThan(5e5); // laminar over the whole plate
@@ -88,6 +88,7 @@ describe('calculations: templates, saved records, parametric runs and withdrawal
     expect(h).toBeLessThan(30);
     // Every step names its pinned version and hash.
     expect(step('nusselt-laminar').correlation).toMatchObject({ slug: 'flat-plate-laminar-average', version: 1, contentHash: expect.stringMatching(/^[0-9a-f]{64}$/) });
+    expect(step('air-properties').correlation).toMatchObject({ slug: 'air-properties-1atm', version: 2 });
     expect(res.body.warnings).toEqual([]);
   });
 
@@ -107,11 +108,11 @@ describe('calculations: templates, saved records, parametric runs and withdrawal
   });
 
   it('reports a range warning at the step where it arises, also in the top-level list with the step key', async () => {
-    const res = await call(`/api/templates/${TEMPLATE}/run`, { cookie: engineer.cookie, body: { inputs: { T_inf: 900, T_s: 1400, p: 101325, u_inf: 2, L: 0.2, W: 0.2 } } });
+    const res = await call(`/api/templates/${TEMPLATE}/run`, { cookie: engineer.cookie, body: { inputs: { T_inf: 1400, T_s: 1800, p: 101325, u_inf: 2, L: 0.2, W: 0.2 } } });
     expect(res.status).toBe(200);
     const air = res.body.steps.find((s: { key: string }) => s.key === 'air-properties');
     expect(air.warnings).toHaveLength(1);
-    expect(air.warnings[0]).toMatchObject({ symbol: 'T', value: 1150, max: 1000, step: 'air-properties' });
+    expect(air.warnings[0]).toMatchObject({ symbol: 'T', value: 1600, max: 1500, step: 'air-properties' });
     expect(res.body.warnings).toEqual([air.warnings[0]]);
     const refused = await call(`/api/templates/${TEMPLATE}/run`, { cookie: engineer.cookie, body: { inputs: { T_inf: 300, T_s: 340, p: 101325, u_inf: -1, L: 0.2, W: 0.2 } } });
     expect(refused.status).toBe(422);

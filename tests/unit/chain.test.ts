@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { readLibrary, readTemplates } from '@/lib/governance/library';
+import { readLibrary, readTemplates, seededVersion } from '@/lib/governance/library';
 import { compiled, contentHash, EvaluationError, type Definition } from '@/lib/engine';
 import { compileChain, type Resolve } from '@/lib/engine/chain';
 import { validateTemplate } from '@/lib/engine/validate';
@@ -8,10 +8,10 @@ import type { TemplateDefinition } from '@/lib/engine/template-types';
 import { CALCULATIONS } from '@/validation/reference/calculations';
 
 const library = readLibrary();
-/** Resolves pins against the standard library files, as the seeder freezes them (version 1). */
+/** Resolves pins against the standard library files, as the seeder freezes them (version 1, or 2 for generated tables). */
 const resolve: Resolve = (pin) => {
-  const e = library.find((x) => x.slug === pin.slug);
-  if (!e || pin.version !== 1) return { problem: 'no such version' };
+  const e = seededVersion(pin.slug, pin.version, library);
+  if (!e) return { problem: 'no such version' };
   if (contentHash(e.definition, e.checkCases) !== pin.contentHash) return { problem: 'content hash does not match' };
   return compiled(e.definition as unknown as Definition);
 };
@@ -26,6 +26,19 @@ describe('calculation chains', () => {
       expect(report.passed, `${t.slug}: ${JSON.stringify(report.stages.flatMap((s) => s.issues)).slice(0, 500)}`).toBe(true);
       expect(report.summary.checkCases).toBeGreaterThanOrEqual(4);
     }
+  });
+
+  it('keeps every template check case equal to the hand calculation it names, recomputed now', () => {
+    let checked = 0;
+    for (const t of templates) {
+      for (const c of t.checkCases as { inputs: Record<string, number>; expected: Record<string, number>; source: { locator?: string } }[]) {
+        const key = /calculations\.ts#(\w+)/.exec(c.source.locator ?? '')?.[1];
+        expect(key, `${t.slug}: names its hand calculation`).toBeDefined();
+        const hand = CALCULATIONS[key!](c.inputs);
+        for (const [s, v] of Object.entries(c.expected)) { expect(Math.abs(hand[s] / v - 1), `${t.slug} ${s}`).toBeLessThan(1e-9); checked++; }
+      }
+    }
+    expect(checked).toBeGreaterThan(80);
   });
 
   it('converts units at each binding and records every step, with the regime rule', () => {
@@ -45,9 +58,9 @@ describe('calculation chains', () => {
 
   it('reports a range warning at the step where it arises, and picks the mixed layer past transition', () => {
     const chain = compileChain(flatDef(), resolve);
-    const hot = chain.runDetailed(chain.readInputs({ T_inf: 900, T_s: 1300, p: 101325, u_inf: 5, L: 0.3, W: 0.3 }, 'inputs'));
+    const hot = chain.runDetailed(chain.readInputs({ T_inf: 1300, T_s: 1800, p: 101325, u_inf: 5, L: 0.3, W: 0.3 }, 'inputs'));
     expect(hot.warnings.map((w) => [w.step, w.symbol])).toEqual([['air-properties', 'T']]);
-    expect(hot.steps.find((s) => s.key === 'air-properties')!.warnings[0].message).toMatch(/T = 1100 is above the maximum 1000 of the published validity range/);
+    expect(hot.steps.find((s) => s.key === 'air-properties')!.warnings[0].message).toMatch(/T = 1550 is above the maximum 1500 of the published validity range/);
     const fast = chain.runDetailed(chain.readInputs({ T_inf: 300, T_s: 400, p: 101000, u_inf: 12, L: 1.2, W: 0.5 }, 'inputs'));
     expect(fast.steps.map((s) => s.key)).toContain('nusselt-mixed');
     expect(fast.steps.map((s) => s.key)).toContain('thickness-turbulent-scale');

@@ -3,16 +3,16 @@
  * TypeScript from the published correlations and the governed property tables — not through
  * Correlary's engine or the template files. They check a template's wiring (which value feeds which
  * step, unit conversions, the regime rule), not the correlations themselves, which carry their own
- * evidence. A template check case of kind "numerical" names its key here
+ * evidence. A template check case (kind "transcription": it checks wiring) names its key here
  * ("validation/reference/calculations.ts#<key>"); validation/library.test.ts recomputes it.
  */
-import { readLibrary } from '@/lib/governance/library';
+import { readLibrary, readPropertyTables } from '@/lib/governance/library';
 
 type Row = Record<string, number>;
 
-/** Linear interpolation in a governed property table (the seeded file), by key column. */
+/** Linear interpolation in a governed property table, by key column: the version the templates pin (2 when generated). */
 export function tableAt(slug: string, at: number): Row {
-  const entry = readLibrary().find((e) => e.slug === slug);
+  const entry = readPropertyTables().find((e) => e.slug === slug) ?? readLibrary().find((e) => e.slug === slug);
   const table = (entry?.definition as { tables?: { key: string; columns: { name: string; values: number[] }[] }[] })?.tables?.[0];
   if (!table) throw new Error(`no table in ${slug}`);
   const key = table.columns.find((c) => c.name === table.key)!.values;

@@ -3,7 +3,7 @@
  * Correlary's engine: similarity solutions solved numerically (./similarity.ts), Colebrook solved by
  * fixed-point iteration, averages obtained by quadrature of the local laws, the Graetz eigenvalue,
  * and published equations re-implemented by hand in plain TypeScript (not from the definition files).
- * A check case whose source is "numerical" names its key here in its locator
+ * A check case backed by one of these (independent-solution, cross-check, or transcription) names its key in its locator
  * ("validation/reference/formulas.ts#<key>"); validation/library.test.ts recomputes it.
  */
 import { blasius, graetzNusseltUWT, ostrachG, pohlhausenNusseltCoefficient, powerLawWallNusseltCoefficient, thermalThicknessEta } from './similarity';
