@@ -22,6 +22,7 @@ export default async function WorkspaceLayout({ children }: { children: React.Re
   const items = NAV.filter((n) => !n.roles || n.roles.some((r) => user.roles.includes(r)));
   return (
     <div className="flex min-h-screen flex-col">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-paper-raised focus:px-3 focus:py-2 focus:shadow">Skip to the content</a>
       <header className="border-b border-line bg-paper-raised">
         <div className="mx-auto flex max-w-7xl items-center gap-6 px-4 py-2.5">
           <Link href="/library" aria-label="Correlary home"><Logo /></Link>
@@ -34,7 +35,7 @@ export default async function WorkspaceLayout({ children }: { children: React.Re
           </div>
         </div>
       </header>
-      <main className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">{children}</main>
+      <main id="main" tabIndex={-1} className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">{children}</main>
       <footer className="border-t border-line py-3 text-center text-xs text-ink-faint">
         Correlary — correlations with their sources, ranges and sign-offs.
       </footer>

@@ -2,7 +2,7 @@
 
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
-import { useMutation, useQuery } from '@tanstack/react-query';
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { api, ApiError } from '@/lib/client/api';
 import { QueryState } from '@/components/ui/query-state';
@@ -89,11 +89,16 @@ function DecisionForm({ slug, version, needsWaiver }: { slug: string; version: n
   const router = useRouter();
   const [comment, setComment] = useState('');
   const [waiver, setWaiver] = useState('');
+  const qc = useQueryClient();
   const [password, setPassword] = useState('');
   const [errors, setErrors] = useState<Record<string, string>>({});
   const decide = useMutation({
     mutationFn: (decision: 'approve' | 'return') => api(`/api/correlations/${slug}/versions/${version}/decision`, { body: { decision, comment, ...(decision === 'approve' ? { password, ...(needsWaiver ? { waiver } : {}) } : {}) } }),
-    onSuccess: () => router.push(`/correlations/${slug}/versions/${version}`),
+    // The cached version still says "in review": drop it so the page shows the state just signed.
+    onSuccess: async (_, decision) => {
+      await Promise.all([qc.invalidateQueries({ queryKey: ['version', slug] }), qc.invalidateQueries({ queryKey: ['correlation', slug] }), qc.invalidateQueries({ queryKey: ['deviation', slug] })]);
+      router.push(`/correlations/${slug}/versions/${version}?signed=${decision === 'approve' ? 'approved' : 'returned'}`);
+    },
     onError: (e) => setErrors(e instanceof ApiError ? { ...e.fieldErrors(), form: e.message } : { form: String(e) }),
   });
   return (
