@@ -3,6 +3,7 @@ import { checkExpression, ExpressionError, FUNCTIONS, toJs, BUILTIN_CONSTANTS } 
 import { breaks, compileLimits, EvaluationError, readInputValues, warningOf, type CompiledDefinition, type CompiledLimit } from './compile';
 import { DefinitionError, type DefinitionIssue } from './analyse';
 import { convert, describeDimension, hasDimensionOf, isDimensionless, isOffsetUnit, parseUnit, quantity } from './units';
+import { sameDimension } from './dimensions';
 import { canonicalJson, sha256Hex } from './canonical';
 import { pinsOf } from './template-types';
 import type { ChainResult, ChainStep, ChainWarning, CorrelationStep, ExpressionStep, LeafStep, Pin, StepRecord, TemplateDefinition } from './template-types';
@@ -68,15 +69,6 @@ export interface CompiledChain {
     /** Per choice step (in order), the option index picked in each row. */
     picks: Uint8Array[];
   };
-}
-
-function sameDimension(a: string, b: string): boolean {
-  if (isDimensionless(a) || isDimensionless(b)) return isDimensionless(a) && isDimensionless(b);
-  try {
-    return parseUnit(a).equalBase(parseUnit(b));
-  } catch {
-    return false;
-  }
 }
 
 export function compileChain(def: TemplateDefinition, resolve: Resolve): CompiledChain {

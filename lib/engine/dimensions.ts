@@ -88,7 +88,8 @@ function toNumber(v: unknown): number {
   return u.dimensions.every((d) => d === 0) ? (u.value as number) : u.toSI().toNumber();
 }
 
-function sameDimension(a: string, b: string): boolean {
+/** True when two declared units have the same dimension (both dimensionless counts). */
+export function sameDimension(a: string, b: string): boolean {
   if (isDimensionless(a) || isDimensionless(b)) return isDimensionless(a) && isDimensionless(b);
   try {
     return parseUnit(a).equalBase(parseUnit(b));

@@ -5,7 +5,7 @@
  * Every symbol of the chain is declared once: the template's inputs and constants, then each step's
  * outputs in order. A step reads only symbols declared before it.
  */
-import type { Category, ConstantDef, InputDef, Reference, ValidityLimit, Warning } from './types';
+import type { Definition, Warning } from './types';
 
 /** A correlation version pinned by number and content hash (what a reviewer signed). */
 export interface Pin {
@@ -56,23 +56,12 @@ export type ChainStep = LeafStep | ChoiceStep;
 export const STEP_KINDS = ['correlation', 'expression', 'choice'] as const;
 export type StepKind = (typeof STEP_KINDS)[number];
 
-export interface TemplateDefinition {
-  schemaVersion: 1;
+/** The descriptive head, inputs, constants, validity and references are those of a correlation definition. */
+export interface TemplateDefinition extends Pick<Definition, 'schemaVersion' | 'title' | 'summary' | 'category' | 'situation' | 'tags' | 'inputs' | 'constants' | 'validity' | 'references' | 'notes'> {
   kind: 'template';
-  title: string;
-  summary: string;
-  category: Category;
-  situation: string;
-  tags?: string[];
-  inputs: InputDef[];
-  constants?: ConstantDef[];
   steps: ChainStep[];
   /** The chain symbols a run reports as its results, in this order. */
   outputs: { symbol: string; name: string }[];
-  /** Limits on the template's own inputs (each step's correlation keeps its own). */
-  validity?: ValidityLimit[];
-  references: Reference[];
-  notes?: string;
 }
 
 /** A range warning of a chain, with the step where it arose. */

@@ -55,17 +55,12 @@ export function libraryHash(library = readLibrary(), tables = readPropertyTables
  * file never carries a hash that could go stale.
  */
 export function readTemplates(hashOf: PinSource = libraryHash(), dir = TEMPLATE_DIR): LibraryEntry[] {
-  return readdirSync(dir)
-    .filter((f) => f.endsWith('.json'))
-    .sort()
-    .map((f) => {
-      const entry = JSON.parse(readFileSync(join(dir, f), 'utf8')) as LibraryEntry;
-      if (`${entry.slug}.json` !== f) throw new Error(`${f}: the slug "${entry.slug}" must match the file name`);
-      const pin = (step: { kind: string; use?: { slug: string; version: number; contentHash?: string }; options?: { steps: unknown[] }[] }) => {
-        if (step.use) step.use.contentHash = hashOf(step.use.slug, step.use.version);
-        step.options?.forEach((o) => o.steps.forEach((s) => pin(s as never)));
-      };
-      (entry.definition.steps as never[]).forEach(pin);
-      return entry;
-    });
+  return readLibrary(dir).map((entry) => {
+    const pin = (step: { kind: string; use?: { slug: string; version: number; contentHash?: string }; options?: { steps: unknown[] }[] }) => {
+      if (step.use) step.use.contentHash = hashOf(step.use.slug, step.use.version);
+      step.options?.forEach((o) => o.steps.forEach((s) => pin(s as never)));
+    };
+    (entry.definition.steps as never[]).forEach(pin);
+    return entry;
+  });
 }
