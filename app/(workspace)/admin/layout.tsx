@@ -6,6 +6,7 @@ const TABS = [
   { href: '/admin/tokens', label: 'API tokens' },
   { href: '/admin/audit', label: 'Audit trail' },
   { href: '/admin/mail', label: 'Sent mail' },
+  { href: '/admin/evidence', label: 'Evidence policy' },
 ];
 
 export default async function AdminLayout({ children }: { children: React.ReactNode }) {
