@@ -35,6 +35,8 @@ export function EvaluatePanel({ detail }: { detail: VersionDetail }) {
       inputs[i.symbol] = units[i.symbol] === i.unit ? n : { value: n, unit: units[i.symbol] };
     }
     setFieldErrors(errors);
+    // Never leave an earlier result beside inputs it does not belong to.
+    run.reset();
     if (Object.keys(errors).length === 0) run.mutate(inputs);
   }
 
@@ -71,7 +73,8 @@ export function EvaluatePanel({ detail }: { detail: VersionDetail }) {
       </form>
       {run.isError && !Object.keys(fieldErrors).length && <p role="alert" className="rounded bg-danger-bg px-2 py-1 text-sm text-danger">{run.error.message}</p>}
       {run.data && (
-        <div className="space-y-2" aria-live="polite">
+        <div className={`space-y-2 ${warnings.length ? 'rounded border-2 border-caution-line p-2' : ''}`} aria-live="polite">
+          {warnings.length > 0 && <p role="status" className="text-sm font-medium text-caution">⚠ Outside the published validity range: an extrapolation, not a validated value.</p>}
           <table className="table-plain">
             <tbody>
               {d.outputs.map((o) => <tr key={o.symbol}><th className="w-1/3 normal-case">{o.symbol}</th><td className="font-mono text-base" data-testid={`out-${o.symbol}`}>{formatNumber(run.data.outputs[o.symbol], 6)}</td><td className="text-xs text-ink-soft">{isDimensionless(o.unit) ? '' : o.unit}</td></tr>)}

@@ -110,6 +110,15 @@ export function limitMessage(lim: CompiledLimit, value: number): string {
   return `${lim.symbol} = ${fmt(value)} is ${what}${lim.note && !lim.note.startsWith('table:') ? ` — ${lim.note}` : ''}`;
 }
 
+/**
+ * Why an output has no value. A broken validity limit usually is the cause: name it first
+ * ("Re_D = -5 is below the minimum 0 …"), then the formula's NaN or Infinity.
+ */
+export function notFiniteMessage(symbol: string, value: number, warnings: Warning[]): string {
+  const cause = warnings.length ? `${warnings.map((w) => w.message).join('; ')}. ` : '';
+  return `${cause}${symbol} cannot be computed for these inputs (the formula gives ${value})${cause ? '' : '; check them against the validity ranges'}`;
+}
+
 /** A limit's warning for a value (the message names the symbol, the value and the published bound). */
 export function warningOf(lim: CompiledLimit, value: number): Warning {
   const w: Warning = { symbol: lim.symbol, value, message: limitMessage(lim, value) };
@@ -268,7 +277,7 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
         run(v, W, FUNCTION_IMPLS as never, solveStep, tableStep);
         for (let i = 0; i < nOut; i++) {
           const value = v[outputSlots[i]];
-          if (!Number.isFinite(value)) throw new EvaluationError('not-finite', `${outputSymbols[i]} cannot be computed for these inputs (the formula gives ${value}); check them against the validity ranges`, outputSymbols[i], pending ?? []);
+          if (!Number.isFinite(value)) throw new EvaluationError('not-finite', notFiniteMessage(outputSymbols[i], value, pending ?? []), outputSymbols[i], pending ?? []);
           outputs[row * nOut + i] = value;
         }
       } catch (err) {
@@ -298,7 +307,7 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
     for (let i = 0; i < outputSymbols.length; i++) {
       const value = v[outputSlots[i]];
       if (!Number.isFinite(value)) {
-        throw new EvaluationError('not-finite', `${outputSymbols[i]} cannot be computed for these inputs (the formula gives ${value}); check them against the validity ranges`, outputSymbols[i], warnings);
+        throw new EvaluationError('not-finite', notFiniteMessage(outputSymbols[i], value, warnings), outputSymbols[i], warnings);
       }
       outputs[outputSymbols[i]] = value;
     }

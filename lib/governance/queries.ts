@@ -36,8 +36,14 @@ export async function listCorrelations({ actor, query, kind = 'correlation' }: {
   const where: string[] = ['c.kind = :kind', `EXISTS (SELECT 1 FROM correlation_versions v WHERE v.correlation_id = c.id AND ${visible})`];
   const repl: Record<string, unknown> = { me: actor?.id ?? 0, approver: isApprover ? 1 : 0, kind };
   if (query.q) {
-    where.push('(c.title LIKE :q OR c.slug LIKE :q OR c.situation LIKE :q OR c.tags LIKE :q)');
-    repl.q = `%${query.q.replace(/[%_\\]/g, (m) => `\\${m}`)}%`;
+    // Every word must appear somewhere — title, slug, situation, tags, or the approved definition (input and
+    // output names, references): "laminar flat plate average" and "reynolds" find what an engineer means.
+    const words = query.q.toLowerCase().split(/\s+/).filter(Boolean).slice(0, 8);
+    words.forEach((w, i) => {
+      where.push(`(c.title LIKE :q${i} OR c.slug LIKE :q${i} OR c.situation LIKE :q${i} OR c.tags LIKE :q${i}
+        OR EXISTS (SELECT 1 FROM correlation_versions s WHERE s.correlation_id = c.id AND s.status = 'approved' AND s.definition LIKE :q${i}))`);
+      repl[`q${i}`] = `%${w.replace(/[%_\\]/g, (m) => `\\${m}`)}%`;
+    });
   }
   if (query.category) { where.push('c.category = :category'); repl.category = query.category; }
   if (query.situation) { where.push('c.situation = :situation'); repl.situation = query.situation; }

@@ -183,4 +183,13 @@ describe('integrator API', () => {
   it('keeps sessions working on the API', async () => {
     expect((await call(`/api/correlations/${CB}/evaluate`, { cookie: engineerCookie, body })).status).toBe(200);
   });
+  it('searches by every word, in titles and in the approved definitions, and explains a result the formula cannot give', async () => {
+    const phrase = await call(`/api/correlations?q=${encodeURIComponent('laminar flat plate average')}`, { token: evalToken });
+    expect(phrase.body.items.map((i: { slug: string }) => i.slug)).toContain('flat-plate-laminar-average');
+    const word = await call('/api/correlations?q=reynolds&pageSize=200', { token: evalToken });
+    expect(word.body.total).toBeGreaterThan(20);
+    const negative = await call('/api/correlations/pipe-turbulent-gnielinski/evaluate', { token: evalToken, body: { inputs: { Re_D: -5, Pr: 3 } } });
+    expect(negative.status).toBe(422);
+    expect(negative.body.error.message).toMatch(/^Re_D = -5 is below the minimum 3000 of the published validity range/);
+  });
 });

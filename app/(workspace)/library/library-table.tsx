@@ -3,6 +3,7 @@
 import Link from 'next/link';
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
+import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 import { api } from '@/lib/client/api';
 import { StatusBadge } from '@/components/ui/status-badge';
 
@@ -16,15 +17,31 @@ const CATEGORIES = ['external-flow', 'internal-flow', 'free-convection', 'fricti
 const PAGE_SIZE = 25;
 
 export function LibraryTable() {
-  const [q, setQ] = useState('');
-  const [debounced, setDebounced] = useState('');
-  const [category, setCategory] = useState('');
-  const [status, setStatus] = useState('');
-  const [grade, setGrade] = useState('');
-  const [sort, setSort] = useState<SortKey>('title');
-  const [dir, setDir] = useState<'asc' | 'desc'>('asc');
-  const [page, setPage] = useState(1);
-  useEffect(() => { const t = setTimeout(() => { setDebounced(q.trim()); setPage(1); }, 250); return () => clearTimeout(t); }, [q]);
+  // Search, filters, sort and page live in the address, so Back and a shared link keep them.
+  const search = useSearchParams();
+  const router = useRouter();
+  const pathname = usePathname();
+  const [q, setQ] = useState(search.get('q') ?? '');
+  const [debounced, setDebounced] = useState(search.get('q') ?? '');
+  const [category, setCategory] = useState(search.get('category') ?? '');
+  const [status, setStatus] = useState(search.get('status') ?? '');
+  const [grade, setGrade] = useState(search.get('grade') ?? '');
+  const [sort, setSort] = useState<SortKey>((['title', 'category', 'updated', 'slug'] as const).find((k) => k === search.get('sort')) ?? 'title');
+  const [dir, setDir] = useState<'asc' | 'desc'>(search.get('dir') === 'desc' ? 'desc' : 'asc');
+  const [page, setPage] = useState(Math.max(1, Number(search.get('page')) || 1));
+  useEffect(() => { const t = setTimeout(() => { if (q.trim() !== debounced) { setDebounced(q.trim()); setPage(1); } }, 250); return () => clearTimeout(t); }, [q, debounced]);
+  useEffect(() => {
+    const shown = new URLSearchParams();
+    if (debounced) shown.set('q', debounced);
+    if (category) shown.set('category', category);
+    if (status) shown.set('status', status);
+    if (grade) shown.set('grade', grade);
+    if (sort !== 'title') shown.set('sort', sort);
+    if (dir !== 'asc') shown.set('dir', dir);
+    if (page > 1) shown.set('page', String(page));
+    const next = shown.toString();
+    if (next !== search.toString()) router.replace(next ? `${pathname}?${next}` : pathname, { scroll: false });
+  }, [debounced, category, status, grade, sort, dir, page, pathname, router, search]);
 
   const params = new URLSearchParams({ page: String(page), pageSize: String(PAGE_SIZE), sort, dir });
   if (debounced) params.set('q', debounced);
