@@ -76,6 +76,7 @@ export type RouteKey = keyof typeof ACCESS;
 export const OUTSIDE_THE_WRAPPER = {
   'GET /api/health': 'public liveness and readiness, no data',
   'GET /api/openapi.json': 'public API description, no data',
+  'GET /api/clients/correlary.py': 'public Python client source, no data',
   'GET /api/auth/{...nextauth}': "next-auth's sign-in endpoints (their own CSRF token)",
   'POST /api/auth/{...nextauth}': "next-auth's sign-in endpoints (their own CSRF token)",
 } as const;
