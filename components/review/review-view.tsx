@@ -10,6 +10,7 @@ import { StatusBadge } from '@/components/ui/status-badge';
 import { Field } from '@/components/ui/field';
 import { SeriesChart } from '@/components/charts/series-chart';
 import { ValidationReportView } from '@/components/correlation/validation-report';
+import { DefinitionFacts, EquationsSection } from '@/components/correlation/definition-summary';
 import type { VersionDetail } from '@/components/correlation/types';
 import type { Comparison } from '@/lib/engine/compare';
 import { formatNumber } from '@/lib/client/units';
@@ -48,6 +49,11 @@ export function ReviewView({ slug, version, userId }: { slug: string; version: n
             </section>
           )}
           {v.kind !== 'template' && <>
+          <section className="space-y-3" aria-label="The definition under review">
+            <h2 className="font-semibold">The definition under review</h2>
+            <EquationsSection v={v} />
+            <DefinitionFacts v={v} />
+          </section>
           <section className="panel space-y-2" aria-label="Differences">
             <h2 className="font-semibold">Definition against the previous approved version</h2>
             {deviation.data && !deviation.data.previous && <p className="text-sm text-ink-soft">{deviation.data.message}</p>}

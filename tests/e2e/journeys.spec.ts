@@ -59,6 +59,10 @@ test('an approver reviews the diff and deviation chart and approves with the pas
   await page.goto('/review');
   const row = page.getByRole('row', { name: /brightwater-louvre-pressure-loss/ });
   await row.getByRole('link', { name: 'Review' }).click();
+  // The definition itself comes first: equations, inputs and outputs with units, validity ranges, references.
+  const underReview = page.getByRole('region', { name: 'The definition under review' });
+  await expect(underReview.getByText('800 ≤ Re_h ≤ 12000')).toBeVisible();
+  await expect(underReview.getByRole('region', { name: 'References' })).toContainText('BTS-TR-2026-014');
   await expect(page.getByRole('table', { name: 'Definition differences' })).toBeVisible();
   await expect(page.getByRole('table', { name: 'Definition differences' }).getByText('"expression": "2.1 * (1/sigma - 1)^2 + 38 / Re_h^0.5"')).toBeVisible();
   await expect(page.getByTestId('largest-difference')).toContainText('Largest difference');
