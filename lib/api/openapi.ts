@@ -22,6 +22,10 @@ function params(s: z.ZodObject, where: 'path' | 'query') {
   });
 }
 
+const deprecationHeaders = {
+  Deprecation: { description: 'Set when the pinned version is superseded or withdrawn: since when, as @epoch-seconds (RFC 9745)', schema: { type: 'string' } },
+  Link: { description: 'With Deprecation: <…/versions/n>; rel="successor-version", the approved version, when there is one', schema: { type: 'string' } },
+};
 const errors = (...codes: number[]) => Object.fromEntries(codes.map((c) => [String(c), { $ref: `#/components/responses/E${c}` }]));
 const json = (s: ZodType, io: 'input' | 'output' = 'output') => ({ content: { 'application/json': { schema: schema(s, io) } } });
 
@@ -71,7 +75,7 @@ export function openApiDocument(serverUrl: string) {
         post: {
           operationId: 'evaluate', summary: 'Evaluate a correlation (single inputs or a batch of rows)', parameters: params(correlationPath, 'path'),
           requestBody: { required: true, ...json(evaluateBody, 'input') },
-          responses: { 200: { description: 'Outputs with range warnings, version and content hash', ...json(evaluateAnswer) }, ...errors(400, 401, 403, 404, 409, 413, 422, 429) },
+          responses: { 200: { description: 'Outputs with range warnings, version and content hash. A pinned version that is superseded or withdrawn answers with a warning in the body and the headers below.', headers: deprecationHeaders, ...json(evaluateAnswer) }, ...errors(400, 401, 403, 404, 409, 413, 422, 429, 503) },
         },
       },
       '/api/compare': { post: { operationId: 'compare', summary: 'Evaluate several correlations over a range of one input', requestBody: { required: true, ...json(compareBody, 'input') }, responses: { 200: { description: 'Series and largest differences' }, ...errors(401, 403, 404, 422) } } },
@@ -82,7 +86,7 @@ export function openApiDocument(serverUrl: string) {
         post: {
           operationId: 'runTemplate', summary: 'Run a calculation template: one input set with every step, or a batch of rows', parameters: params(correlationPath, 'path'),
           requestBody: { required: true, ...json(runBody, 'input') },
-          responses: { 200: { description: 'Every step (single) or every row (batch) with range warnings at their step, the template version and hash', ...json(runAnswer) }, ...errors(400, 401, 403, 404, 409, 413, 422, 429, 503) },
+          responses: { 200: { description: 'Every step (single) or every row (batch) with range warnings at their step, the template version and hash', headers: deprecationHeaders, ...json(runAnswer) }, ...errors(400, 401, 403, 404, 409, 413, 422, 429, 503) },
         },
       },
       '/api/projects': {

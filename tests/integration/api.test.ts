@@ -192,4 +192,17 @@ describe('integrator API', () => {
     expect(negative.status).toBe(422);
     expect(negative.body.error.message).toMatch(/^Re_D = -5 is below the minimum 3000 of the published validity range/);
   });
+  it('marks a pinned superseded version as deprecated, pointing at its successor; the approved one is not', async () => {
+    const old = await call('/api/correlations/air-properties-1atm/evaluate', { token: evalToken, body: { version: 1, inputs: { T: 300 } } });
+    expect(old.status).toBe(200);
+    expect(old.headers.get('deprecation')).toMatch(/^@\d{9,}$/);
+    expect(old.headers.get('link')).toBe('</api/correlations/air-properties-1atm/versions/2>; rel="successor-version"');
+    expect(old.body.warnings[0]).toMatchObject({ symbol: 'version', message: expect.stringMatching(/superseded/) });
+    const now = await call('/api/correlations/air-properties-1atm/evaluate', { token: evalToken, body: { inputs: { T: 300 } } });
+    expect(now.body.version).toBe(2);
+    expect(now.headers.get('deprecation')).toBeNull();
+    // Lemmon et al. (2000) / Lemmon & Jacobsen (2004) through python3-iapws at 300 K, 101.325 kPa: ρ 1.1770 kg/m³, μ 1.8537e-5 Pa s (STACK.md).
+    expect(now.body.outputs.rho).toBeCloseTo(1.1770, 3);
+    expect(Math.abs(now.body.outputs.mu / 1.8537e-5 - 1)).toBeLessThan(1e-3);
+  });
 });
