@@ -42,6 +42,13 @@ class CorrelaryError(Exception):
         self.details = details
 
 
+def _body(key, value, version):
+    body = {key: value}
+    if version is not None:
+        body["version"] = int(version)
+    return body
+
+
 def _inputs(values):
     """Numbers stay numbers; (value, unit) pairs become {"value", "unit"}."""
     out = {}
@@ -114,9 +121,7 @@ class Client:
         >>> r = c.evaluate("cylinder-crossflow-churchill-bernstein", {"Re_D": 1e4, "Pr": 0.71})
         >>> r["outputs"]["Nu_D"]
         """
-        body = {"inputs": _inputs(inputs)}
-        if version is not None:
-            body["version"] = int(version)
+        body = _body("inputs", _inputs(inputs), version)
         answer = self._request("POST", f"/api/correlations/{urllib.parse.quote(slug)}/evaluate", body)
         self._warn(answer.get("warnings"))
         return answer
@@ -127,9 +132,7 @@ class Client:
         >>> rs = c.evaluate_rows("pipe-turbulent-gnielinski", [{"Re_D": 1e4, "Pr": 3}, {"Re_D": 1e5, "Pr": 3}])
         >>> [r["outputs"]["Nu_D"] for r in rs]
         """
-        body = {"rows": [_inputs(r) for r in rows]}
-        if version is not None:
-            body["version"] = int(version)
+        body = _body("rows", [_inputs(r) for r in rows], version)
         answer = self._request("POST", f"/api/correlations/{urllib.parse.quote(slug)}/evaluate", body)
         self._warn(answer.get("warnings"))
         for r in answer["results"]:
@@ -142,9 +145,7 @@ class Client:
         >>> r = c.run_template("flat-plate-forced-convection-air", {"T_inf": (20, "degC"), "T_s": (60, "degC"), "p": (1, "atm"), "u_inf": 3, "L": 0.5, "W": 0.3})
         >>> r["outputs"]["h"]
         """
-        body = {"inputs": _inputs(inputs)}
-        if version is not None:
-            body["version"] = int(version)
+        body = _body("inputs", _inputs(inputs), version)
         answer = self._request("POST", f"/api/templates/{urllib.parse.quote(slug)}/run", body)
         self._warn(answer.get("warnings"))
         return answer

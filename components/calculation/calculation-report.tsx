@@ -1,21 +1,21 @@
 'use client';
 
 import Link from 'next/link';
-import { useQueries, useQuery } from '@tanstack/react-query';
+import { useQueries } from '@tanstack/react-query';
 import { api } from '@/lib/client/api';
 import { formatNumber } from '@/lib/client/units';
 import { QueryState } from '@/components/ui/query-state';
 import { Caution } from '@/components/ui/caution';
 import { pinsOf } from '@/lib/engine/template-types';
 import { ResultsTable, StepChain } from './step-chain';
-import { FlagBanner, inputText, type CalculationDetail } from './calculation-view';
+import { FlagBanner, inputText, useCalculation } from './calculation-view';
 import { Sym } from './symbol';
 
 interface PinnedDetail { slug: string; version: number; title: string; contentHash: string; status: string; definition: { references: { citation: string; locator?: string; doi?: string }[]; propertyBasis?: string } }
 
 /** The printable record of a saved calculation: the browser prints it or saves it as PDF. */
 export function CalculationReport({ id, revision }: { id: number; revision?: number }) {
-  const q = useQuery({ queryKey: ['calculation', id, revision], queryFn: () => api<CalculationDetail>(`/api/calculations/${id}${revision ? `?revision=${revision}` : ''}`) });
+  const q = useCalculation(id, revision);
   const pins = q.data ? pinsOf(q.data.content.chain) : [];
   const pinned = useQueries({ queries: pins.map((p) => ({ queryKey: ['version', p.slug, p.version], queryFn: () => api<PinnedDetail>(`/api/correlations/${p.slug}/versions/${p.version}`) })) });
   return (

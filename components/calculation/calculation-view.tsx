@@ -43,9 +43,14 @@ export function FlagBanner({ flags }: { flags: CalculationDetail['flags'] }) {
   );
 }
 
+/** A saved revision (default the latest), shared by the calculation page and its report. */
+export function useCalculation(id: number, revision?: number) {
+  return useQuery({ queryKey: ['calculation', id, revision], queryFn: () => api<CalculationDetail>(`/api/calculations/${id}${revision ? `?revision=${revision}` : ''}`) });
+}
+
 /** A saved calculation revision: inputs, the chain step by step, results, flags, history, re-run and exports. */
 export function CalculationView({ id, revision, justSaved }: { id: number; revision?: number; justSaved: boolean }) {
-  const q = useQuery({ queryKey: ['calculation', id, revision], queryFn: () => api<CalculationDetail>(`/api/calculations/${id}${revision ? `?revision=${revision}` : ''}`) });
+  const q = useCalculation(id, revision);
   const rerun = useMutation({ mutationFn: (n: number) => api<Rerun>(`/api/calculations/${id}/rerun?revision=${n}`, { method: 'POST' }) });
   return (
     <QueryState query={q}>

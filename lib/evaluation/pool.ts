@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import Piscina from 'piscina';
 import { AppError } from '@/lib/http/errors';
 import { EvaluationError } from '@/lib/engine/compile';
-import type { ChainWarning, Pin, TemplateDefinition } from '@/lib/engine/template-types';
+import type { Pin, TemplateDefinition } from '@/lib/engine/template-types';
 import type { Warning } from '@/lib/engine/types';
 
 /*
@@ -65,4 +65,3 @@ export async function runOnPool<W extends Warning = Warning>(task: PoolTask, wha
   };
 }
 
-export type { ChainWarning };
