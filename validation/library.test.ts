@@ -4,7 +4,10 @@ import { compiled, validateVersion, type CheckCase, type Definition } from '@/li
 import { boundsOf, isLogRange } from '@/lib/engine/ranges';
 import { DEFAULT_POLICY, meetsPolicy } from '@/lib/engine/evidence';
 import type { ValidationReport } from '@/lib/engine/validate';
-import { REFERENCES, referenceKey } from '@/validation/reference/formulas';
+import { execFileSync } from 'node:child_process';
+import { crossCheckTolerance } from '@/lib/engine/evidence';
+import { isRetypedCrossCheck, REFERENCES, referenceKey } from '@/validation/reference/formulas';
+import { isPlanned, partnerInputsOf, plannedCases, PYTHON_EVAL } from '@/validation/reference/evidence-plan';
 import { db } from '@/models';
 import { closeSequelize } from '@/lib/db/connection';
 
@@ -32,6 +35,7 @@ function pointsIn(def: Definition, n: number, cases: CheckCase[]): Record<string
 describe('standard library definition files', () => {
   it('holds at least 40 correlations, each passing validation with an out-of-range case; prints the evidence table', () => {
     const rows: string[] = [];
+    const short: string[] = [];
     const totals: Record<string, number> = {};
     for (const { slug, definition, checkCases } of library) {
       const report = validateVersion(definition, checkCases);
@@ -42,10 +46,60 @@ describe('standard library definition files', () => {
       for (const c of cases) expect(c.tolerance.why?.trim().length ?? 0, `${slug} "${c.label}": tolerance needs its reason`).toBeGreaterThanOrEqual(5);
       const e = report.evidence!;
       for (const [k, n] of Object.entries(e.byKind)) totals[k] = (totals[k] ?? 0) + n!;
-      rows.push(`${slug.padEnd(48)} ${e.grade.padEnd(13)} ${String(e.independent).padStart(3)} of ${e.kinds} kinds  ${Object.entries(e.byKind).map(([k, n]) => `${k} ${n}`).join(', ')}`);
+      // In-range cases whose expected value the definition's own formula does not reproduce to 1e-7.
+      const c = compiled(definition as unknown as Definition);
+      const distinct = cases.filter((k) => !k.expectWarnings?.length && !k.expectRefusal && k.source.kind !== 'transcription').filter((k) => {
+        const out = c.evaluate(k.inputs).outputs;
+        return Object.entries(k.expected).some(([sym, v]) => Math.abs(out[sym] / v - 1) > 1e-7);
+      }).length;
+      if (distinct < 3) short.push(slug);
+      rows.push(`${slug.padEnd(48)} ${e.grade.padEnd(13)} ${String(e.independent).padStart(3)} of ${e.kinds} kinds, ${String(distinct).padStart(2)} not reproduced  ${Object.entries(e.byKind).map(([k, n]) => `${k} ${n}`).join(', ')}`);
     }
     expect(library.length).toBeGreaterThanOrEqual(40);
-    console.log(`evidence of the standard library (in-range, passing check cases; policy ${DEFAULT_POLICY.minimumIndependent} independent of ${DEFAULT_POLICY.minimumKinds} kinds):\n${rows.join('\n')}\ntotals: ${Object.entries(totals).map(([k, n]) => `${k} ${n}`).join(', ')}`);
+    console.log(`evidence of the standard library (in-range, passing check cases; policy ${DEFAULT_POLICY.minimumIndependent} independent of ${DEFAULT_POLICY.minimumKinds} kinds):\n${rows.join('\n')}\ntotals: ${Object.entries(totals).map(([k, n]) => `${k} ${n}`).join(', ')}\nfewer than three in-range checks the formula does not reproduce to 1e-7: ${short.length} (${short.join(', ')})`);
+  });
+
+  it('holds the evidence plan as written: every planned value and tolerance recomputed now (python3-iapws for the standard formulations)', () => {
+    const python = (exprs: string[]) => JSON.parse(execFileSync('/usr/bin/python3', ['-c', PYTHON_EVAL], { input: JSON.stringify(exprs), encoding: 'utf8' })) as number[];
+    const planned = plannedCases(library, python);
+    let compared = 0;
+    for (const { slug, checkCases } of library) {
+      const inFile = (checkCases as CheckCase[]).filter(isPlanned);
+      const want = planned.get(slug) ?? [];
+      expect(inFile.map((c) => c.label), `${slug}: planned cases in the file (run npm run evidence:write)`).toEqual(want.map((c) => c.label));
+      want.forEach((w, i) => {
+        const got = inFile[i];
+        expect(got.source, `${slug} "${w.label}" source`).toEqual(w.source);
+        expect(got.tolerance, `${slug} "${w.label}" tolerance`).toEqual(w.tolerance);
+        for (const [k, v] of Object.entries(w.inputs)) expect(Math.abs((got.inputs[k] as number) - (v as number)), `${slug} "${w.label}" input ${k}`).toBeLessThanOrEqual(1e-9 * Math.abs(v as number));
+        for (const [k, v] of Object.entries(w.expected)) expect(Math.abs(got.expected[k] / v - 1), `${slug} "${w.label}" ${k}`).toBeLessThan(1e-9);
+        compared++;
+      });
+    }
+    expect(compared).toBeGreaterThan(100);
+  }, 300_000);
+
+  it('derives every cross-check from an approved library correlation and the two stated accuracies', () => {
+    const slugs = library.map((e) => e.slug);
+    for (const { slug, definition, checkCases } of library) {
+      for (const c of checkCases as CheckCase[]) {
+        // A re-typed copy of another correlation with a chosen tolerance is not a cross-check.
+        expect(isRetypedCrossCheck(slug, c, slugs), `${slug} "${c.label}": compare with the library correlation itself (correlation:<slug>)`).toBe(false);
+        const m = /^correlation:([a-z0-9-]+)(?:\?(.*))?$/.exec(c.source.locator ?? '');
+        if (!m) continue;
+        expect(c.source.kind).toBe('cross-check');
+        const partner = library.find((e) => e.slug === m[1]);
+        expect(partner, `${slug} "${c.label}": partner ${m[1]}`).toBeDefined();
+        const pdef = partner!.definition as unknown as Definition;
+        const own = definition as unknown as Definition;
+        const fixed = Object.fromEntries([...new URLSearchParams(m[2] ?? '').entries()].map(([k, v]) => [k, Number(v)]));
+        const numeric = Object.fromEntries(Object.entries(c.inputs).map(([k, v]) => [k, typeof v === 'number' ? v : v.value]));
+        const result = compiled(pdef).evaluate(partnerInputsOf(pdef, numeric, fixed));
+        expect(result.warnings, `${slug} "${c.label}": inside the partner's validity ranges`).toEqual([]);
+        for (const [sym, v] of Object.entries(c.expected)) expect(Math.abs(result.outputs[sym] / v - 1), `${slug} "${c.label}" ${sym}`).toBeLessThan(1e-9);
+        expect(c.tolerance.rel, `${slug} "${c.label}": tolerance from the stated accuracies`).toBe(crossCheckTolerance({ slug, accuracy: own.accuracy }, { slug: m[1], accuracy: pdef.accuracy }));
+      }
+    }
   });
 
   it('every check case backed by a reference function holds the value that reference recomputes now', () => {
@@ -103,7 +157,7 @@ describe('standard library definition files', () => {
     }
     console.log(`in-range check cases the definition reproduces to 1e-9 without the transcription label (limits and exact solutions among them): ${reproduced.length}\n  ${reproduced.join('\n  ')}`);
     expect(mislabelled).toEqual([]);
-  }, 120_000);
+  }, 300_000);
 
   it('keeps the stable slugs and symbols integrators rely on', () => {
     const want: Record<string, [string[], string[]]> = {

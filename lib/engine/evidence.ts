@@ -1,4 +1,4 @@
-import type { CheckCase, Definition, SourceKind } from './types';
+import type { Accuracy, CheckCase, Definition, SourceKind } from './types';
 
 /**
  * How much a version's check cases prove, computed at validation. Free of mathjs (the browser shows it).
@@ -36,7 +36,7 @@ export interface Evidence {
   coverage: number;
   /** Largest in-range tolerance over the stated accuracy (a check looser than the accuracy proves little). */
   toleranceOverAccuracy: number | null;
-  accuracy: { rel: number; basis: string } | null;
+  accuracy: Accuracy | null;
   policy: EvidencePolicy;
   meetsPolicy: boolean;
 }
@@ -59,7 +59,7 @@ export function evidenceOf({ definition, checkCases, passed, coverage, policy = 
   checkCases.forEach((c, i) => {
     if (!passed[i] || c.expectWarnings?.length || c.expectRefusal) return;
     byKind[c.source.kind] = (byKind[c.source.kind] ?? 0) + 1;
-    if (definition.accuracy && c.source.kind !== 'transcription' && c.tolerance.rel !== undefined) {
+    if (definition.accuracy && definition.accuracy.rel > 0 && c.source.kind !== 'transcription' && c.tolerance.rel !== undefined) {
       looseness = Math.max(looseness ?? 0, c.tolerance.rel / definition.accuracy.rel);
     }
   });
@@ -75,4 +75,19 @@ export function evidenceOf({ definition, checkCases, passed, coverage, policy = 
     grade, meaning: GRADE_MEANING[grade], ...base, published: Boolean(byKind.published), coverage: Number(cover.toFixed(3)),
     toleranceOverAccuracy: looseness === null ? null : Number((looseness as number).toFixed(3)), accuracy: definition.accuracy ?? null, policy, meetsPolicy: ok,
   };
+}
+
+/**
+ * The tolerance a cross-check between two correlations may use, from their stated accuracies: when one
+ * approximates the other, its stated deviation; when both approximate the same third, the sum of their
+ * deviations; otherwise the two accuracies on data combined as independent errors, √(a² + b²). Rounded
+ * up to 0.1 %. Null when either has no stated accuracy (no cross-check can then be justified).
+ */
+export function crossCheckTolerance(a: { slug: string; accuracy?: Accuracy | null }, b: { slug: string; accuracy?: Accuracy | null }): number | null {
+  if (!a.accuracy || !b.accuracy) return null;
+  const up = (x: number) => Math.ceil(x * 1000 - 1e-9) / 1000;
+  if (a.accuracy.approximates === b.slug) return up(a.accuracy.rel);
+  if (b.accuracy.approximates === a.slug) return up(b.accuracy.rel);
+  if (a.accuracy.approximates && a.accuracy.approximates === b.accuracy.approximates) return up(a.accuracy.rel + b.accuracy.rel);
+  return up(Math.hypot(a.accuracy.rel, b.accuracy.rel));
 }

@@ -18,9 +18,15 @@ export interface Definition {
   references: Reference[];
   propertyBasis?: string;
   /** The published accuracy of the correlation on its data, e.g. ±20 % (rel 0.2), with where it is stated. */
-  accuracy?: { rel: number; basis: string };
+  accuracy?: Accuracy;
   notes?: string;
 }
+
+/**
+ * Stated accuracy. rel 0 marks an exact solution of the model the definition states; with
+ * `approximates`, rel is the deviation from that other correlation (an explicit form of an implicit one).
+ */
+export interface Accuracy { rel: number; basis: string; approximates?: string }
 
 export const CATEGORIES = [
   'external-flow', 'internal-flow', 'free-convection', 'friction', 'boundary-layer', 'properties',

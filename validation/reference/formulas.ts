@@ -6,7 +6,8 @@
  * A check case backed by one of these (independent-solution, cross-check, or transcription) names its key in its locator
  * ("validation/reference/formulas.ts#<key>"); validation/library.test.ts recomputes it.
  */
-import { blasius, graetzNusseltUWT, ostrachG, pohlhausenNusseltCoefficient, powerLawWallNusseltCoefficient, thermalThicknessEta } from './similarity';
+import { mixingLengthPipe, turbulentLayer, turbulentLayerNusselt } from './turbulence';
+import { blasius, graetzMeanNusselt, graetzNusseltUWT, ostrachG, pohlhausenNusseltCoefficient, powerLawWallNusseltCoefficient, thermalThicknessEta } from './similarity';
 
 type Inputs = Record<string, number>;
 type Values = Record<string, number>;
@@ -152,3 +153,76 @@ Object.assign(REFERENCES, {
   // U.S. Standard Atmosphere 1976 conductivity law k = 2.64638e-3 T^1.5 / (T + 245.4 × 10^(−12/T)).
   'air-conductivity-ussa76': ({ T }: Inputs) => ({ k: (2.64638e-3 * T ** 1.5) / (T + 245.4 * 10 ** (-12 / T)) }),
 });
+
+/**
+ * Laminar fully developed pipe flow by finite differences (second order, 400 cells), independent of the
+ * closed forms: −(1/r)(r u′)′ = 1 with u′(0) = 0, u(1) = 0 (R = μ = −dp/dx = 1, so τ_w = ½ by the force
+ * balance) gives the Darcy f·Re = 16 τ_w/u_m = 8/u_m, with the flow rate by the trapezoid rule
+ * (discretization error ≈ 1e-6); the uniform-heat-flux energy equation (1/r)(r θ′)′ = 2u/u_m gives Nu_D.
+ */
+function poiseuilleFd(cells = 400) {
+  const h = 1 / cells;
+  const r = Array.from({ length: cells + 1 }, (_, i) => i * h);
+  // Tridiagonal system for −(1/r)(r φ′)′ = s(r) with φ′(0) = 0 (symmetry cell at r = 0) and φ(1) = 0.
+  const solve = (s: number[]) => {
+    const n = cells; // unknowns φ0 … φ(n−1); φn = 0
+    const a = new Array<number>(n).fill(0); const b = new Array<number>(n).fill(0); const c = new Array<number>(n).fill(0); const d = new Array<number>(n).fill(0);
+    for (let i = 0; i < n; i++) {
+      if (i === 0) { b[0] = 4 / (h * h); c[0] = -4 / (h * h); d[0] = s[0]; continue; }
+      const rp = r[i] + h / 2; const rm = r[i] - h / 2;
+      a[i] = -rm / (r[i] * h * h); c[i] = -rp / (r[i] * h * h); b[i] = (rp + rm) / (r[i] * h * h); d[i] = s[i];
+    }
+    for (let i = 1; i < n; i++) { const m = a[i] / b[i - 1]; b[i] -= m * c[i - 1]; d[i] -= m * d[i - 1]; }
+    const phi = new Array<number>(n + 1).fill(0);
+    phi[n - 1] = d[n - 1] / b[n - 1];
+    for (let i = n - 2; i >= 0; i--) phi[i] = (d[i] - c[i] * phi[i + 1]) / b[i];
+    return phi;
+  };
+  const area = (g: (i: number) => number) => 2 * simpsonOn(cells, h, (i) => g(i) * r[i]);
+  const trapezoid = (g: (i: number) => number) => { let s = 0; for (let i = 1; i <= cells; i++) s += (h / 2) * (g(i) * r[i] + g(i - 1) * r[i - 1]); return 2 * s; };
+  const u = solve(r.map(() => 1));
+  const um = trapezoid((i) => u[i]);
+  // Uniform flux: (1/r)(r θ′)′ = 2 u/u_m with θ = T − T_w, so −(1/r)(r θ′)′ = −2u/u_m; q_w = k θ′(1) per unit ΔT scale = 1.
+  const theta = solve(u.map((v) => (-2 * v) / um));
+  const thetaM = area((i) => u[i] * theta[i]) / area((i) => u[i]);
+  return { fRe: 8 / um, nuUhf: (2 * 1) / -thetaM };
+}
+function simpsonOn(cells: number, h: number, g: (i: number) => number): number {
+  let s = g(0) + g(cells);
+  for (let i = 1; i < cells; i++) s += (i % 2 ? 4 : 2) * g(i);
+  return (s * h) / 3;
+}
+let poiseuille: ReturnType<typeof poiseuilleFd> | undefined;
+const lam = () => (poiseuille ??= poiseuilleFd());
+
+/** Lévêque (1928) thin-layer limit Pr → ∞ for the isothermal plate: Nu_x/(Re_x^½ Pr^⅓) → (f″(0)/12)^⅓/Γ(4/3), f″(0) from the Blasius solve. */
+const GAMMA_4_3 = 0.8929795115692492;
+const levequeCoefficient = () => Math.cbrt(blasius().fpp0 / 12) / GAMMA_4_3;
+
+Object.assign(REFERENCES, {
+  'conduction-sphere': () => ({ Nu_D: 2 }),
+  'poiseuille-fd-friction': ({ Re_D }: Inputs) => ({ f: lam().fRe / Re_D }),
+  'poiseuille-fd-uniform-flux': () => ({ Nu_D: lam().nuUhf }),
+  'leveque-local': ({ Re_x, Pr }: Inputs) => ({ Nu_x: levequeCoefficient() * Math.sqrt(Re_x) * Math.cbrt(Pr) }),
+  'leveque-average': ({ Re_L, Pr }: Inputs) => ({ Nu_L: 2 * levequeCoefficient() * Math.sqrt(Re_L) * Math.cbrt(Pr) }),
+  // Pr → 0: the velocity is uniform across the thin thermal layer (slug flow), Nu_x = (Pe_x/π)^½ (isothermal wall).
+  'slug-flow-local': ({ Re_x, Pr }: Inputs) => ({ Nu_x: Math.sqrt((Re_x * Pr) / Math.PI) }),
+  'graetz-series-mean': ({ Re_D, Pr, L_over_D }: Inputs) => ({ Nu_D: graetzMeanNusselt(L_over_D / (Re_D * Pr)) }),
+  'mixing-length-pipe-friction': ({ Re_D }: Inputs) => ({ f: mixingLengthPipe(Re_D).f }),
+  'mixing-length-pipe-nusselt': ({ Re_D, Pr }: Inputs) => ({ Nu_D: mixingLengthPipe(Re_D).nu(Pr) }),
+  'log-wake-plate-cf-local': ({ Re_x }: Inputs) => ({ Cf_x: turbulentLayer(Re_x).cf }),
+  'log-wake-plate-cf-average': ({ Re_L }: Inputs) => ({ Cf_L: 2 * turbulentLayer(Re_L).thetaOverX }),
+  'log-wake-plate-thickness': ({ Re_x }: Inputs) => ({ delta_over_x: turbulentLayer(Re_x).deltaOverX }),
+  'log-wake-plate-nu-local': ({ Re_x, Pr }: Inputs) => ({ Nu_x: turbulentLayerNusselt(Re_x, Pr) }),
+  'log-wake-plate-nu-average': ({ Re_L, Pr }: Inputs) => ({ Nu_L: averageOfLocal((xi) => (Re_L * xi < 2e4 ? 0 : turbulentLayerNusselt(Re_L * xi, Pr)), 0) }),
+});
+
+/**
+ * A hand-written check case of an earlier library that compares a correlation with a re-typed copy of
+ * another library correlation (or of Gnielinski's): a cross-check whose tolerance was chosen, not derived.
+ * The evidence plan replaces these by cross-checks against the approved correlation itself.
+ */
+export function isRetypedCrossCheck(slug: string, c: { source: { kind: string; locator?: string } }, slugs: string[]): boolean {
+  const key = referenceKey(c.source.locator);
+  return Boolean(key && key !== slug && c.source.kind !== 'transcription' && (key === 'gnielinski-independent' || slugs.includes(key)));
+}

@@ -239,3 +239,77 @@ export function powerLawWallNusseltCoefficient(pr: number, n: number): number {
   if (!f) { f = memoByPr((p) => powerLawWallNusseltCoefficientSolved(p, n)); powerLawByExponent.set(n, f); }
   return f(pr);
 }
+
+/**
+ * Graetz (1883) thermal entrance, Poiseuille flow, uniform wall temperature: the series solution
+ * θ(r, ζ) = Σ cₙ φₙ(r) exp(−λₙ² ζ/2) with ζ = 4 (x/D)/(Re_D Pr), from the first 24 eigenpairs of
+ * (1/r)(r φ')' + λ² (1 − r²) φ = 0 found by RK4 shooting and bisection, the coefficients by
+ * orthogonality with the weight r (1 − r²) (Simpson's rule). Mean Nusselt number over 0…x from the
+ * energy balance: Nu_m = −ln θ_m(ζ)/ζ. Truncation error below 1e-6 for ζ ≥ 0.004.
+ */
+const GRAETZ_STEPS = 4000;
+let graetzCache: { lambda: number; weight: number }[] | undefined;
+
+function graetzPairs() {
+  if (graetzCache) return graetzCache;
+  const h = 1 / GRAETZ_STEPS;
+  const shoot = (lambda: number, keep = false) => {
+    const l2 = lambda * lambda;
+    const acc = (r: number, p: number, dp: number) => (r === 0 ? -l2 * p / 2 : -dp / r - l2 * (1 - r * r) * p);
+    let phi = 1;
+    let dphi = 0;
+    const values = keep ? [1] : [];
+    for (let i = 0; i < GRAETZ_STEPS; i++) {
+      const r = i * h;
+      const k1 = [dphi, acc(r, phi, dphi)];
+      const k2 = [dphi + (h / 2) * k1[1], acc(r + h / 2, phi + (h / 2) * k1[0], dphi + (h / 2) * k1[1])];
+      const k3 = [dphi + (h / 2) * k2[1], acc(r + h / 2, phi + (h / 2) * k2[0], dphi + (h / 2) * k2[1])];
+      const k4 = [dphi + h * k3[1], acc(r + h, phi + h * k3[0], dphi + h * k3[1])];
+      phi += (h / 6) * (k1[0] + 2 * k2[0] + 2 * k3[0] + k4[0]);
+      dphi += (h / 6) * (k1[1] + 2 * k2[1] + 2 * k3[1] + k4[1]);
+      if (keep) values.push(phi);
+    }
+    return { wall: phi, values };
+  };
+  const simpsonGrid = (g: (i: number) => number) => {
+    let s = g(0) + g(GRAETZ_STEPS);
+    for (let i = 1; i < GRAETZ_STEPS; i++) s += (i % 2 ? 4 : 2) * g(i);
+    return (s * h) / 3;
+  };
+  const pairs: { lambda: number; weight: number }[] = [];
+  let a = 0.5;
+  let fa = shoot(a).wall;
+  while (pairs.length < 24) {
+    const b = a + 0.5;
+    const fb = shoot(b).wall;
+    if (fa * fb < 0) {
+      let lo = a;
+      let hi = b;
+      let flo = fa;
+      for (let i = 0; i < 50; i++) {
+        const mid = (lo + hi) / 2;
+        const fm = shoot(mid).wall;
+        if (flo * fm <= 0) hi = mid; else { lo = mid; flo = fm; }
+      }
+      const lambda = (lo + hi) / 2;
+      const { values } = shoot(lambda, true);
+      const w = (i: number) => i * h * (1 - (i * h) ** 2);
+      const num = simpsonGrid((i) => w(i) * values[i]);
+      const den = simpsonGrid((i) => w(i) * values[i] ** 2);
+      // θ_m contribution: cₙ · 4 ∫ r (1 − r²) φₙ dr with cₙ = num/den.
+      pairs.push({ lambda, weight: (num / den) * 4 * num });
+    }
+    a = b;
+    fa = fb;
+  }
+  graetzCache = pairs;
+  return pairs;
+}
+
+/** Mean Nusselt number over the thermal entrance length (Graetz series), given L/D over Re_D·Pr. */
+export function graetzMeanNusselt(lOverDOverRePr: number): number {
+  const zeta = 4 * lOverDOverRePr;
+  if (!(zeta >= 0.004)) throw new RangeError(`(L/D)/(Re Pr) = ${lOverDOverRePr} is too short for 24 terms of the series`);
+  const thetaM = graetzPairs().reduce((s, p) => s + p.weight * Math.exp((-p.lambda * p.lambda * zeta) / 2), 0);
+  return -Math.log(thetaM) / zeta;
+}

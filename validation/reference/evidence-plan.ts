@@ -1,0 +1,261 @@
+/**
+ * The evidence plan: check cases whose expected values are computed, not typed. Each entry names where
+ * its value comes from (another library correlation, an independent solution in this folder, or the
+ * standard formulations through python3-iapws) and how its tolerance follows from stated accuracies.
+ * `npm run evidence:write` writes the cases into seeders/correlations/*.json; validation/library.test.ts
+ * rebuilds them and fails when a file and the plan disagree, so every value and tolerance is recomputed
+ * in each test run.
+ */
+import { compiled, type CheckCase, type Definition } from '@/lib/engine';
+import { crossCheckTolerance } from '@/lib/engine/evidence';
+import type { LibraryEntry } from '@/lib/governance/library';
+import { REFERENCES } from './formulas';
+
+type Point = Record<string, number | string>;
+
+interface Planned {
+  slug: string;
+  kind: 'cross-check' | 'independent-solution' | 'standard-formulation' | 'limit' | 'memory';
+  points: Point[];
+  /** cross-check: the other correlation, and fixed values for its inputs the case does not have. */
+  partner?: string;
+  partnerInputs?: Record<string, number>;
+  /** independent-solution and limit: the function in formulas.ts. */
+  reference?: string;
+  /** independent-solution: the model's own uncertainty, combined with the correlation's accuracy. */
+  model?: number;
+  /** standard-formulation: a python3-iapws expression per output (T, P, … substituted from the point). */
+  python?: Record<string, string>;
+  /** limit and memory: the tolerance; memory: the recalled coefficients of Re^(−½). */
+  tolerance?: number;
+  values?: Record<string, number>;
+  citation: string;
+  why: string;
+}
+
+const xc = (slug: string, partner: string, points: Point[], partnerInputs?: Record<string, number>): Planned => ({
+  slug, kind: 'cross-check', partner, partnerInputs, points, citation: '', why: '',
+});
+const ind = (slug: string, reference: string, model: number, points: Point[], citation: string, why: string): Planned => ({
+  slug, kind: 'independent-solution', reference, model, points, citation, why,
+});
+const lim = (slug: string, reference: string, tolerance: number, points: Point[], citation: string, why: string): Planned => ({
+  slug, kind: 'limit', reference, tolerance, points, citation, why,
+});
+const mem = (slug: string, values: Record<string, number>, tolerance: number, points: Point[], citation: string): Planned => ({
+  slug, kind: 'memory', values, tolerance, points, citation, why: 'rounding of the recalled constant and of the definition’s coefficient',
+});
+const std = (slug: string, python: Record<string, string>, tolerance: number, points: Point[], why: string): Planned => ({
+  slug, kind: 'standard-formulation', python, tolerance, points, citation: '', why,
+});
+
+const ML = 'Mixing-length solution of fully developed pipe flow (Nikuradse length, van Driest damping, Kays Pr_t) — validation/reference/turbulence.ts';
+const ML_WHY = 'mixing-length model uncertainty 10 % in Nu for 0.7 ≤ Pr ≤ 10 (from memory) combined with the correlation’s stated accuracy';
+const MLF_WHY = 'mixing-length model uncertainty 5 % in f (from memory) combined with the correlation’s stated accuracy';
+const LW = 'Momentum integral with the law of the wall and wake (Reichardt 1951, Coles 1956, Cebeci & Smith 1974) — validation/reference/turbulence.ts';
+const LW_WHY = 'log-wake model uncertainty 5 % in C_f (from memory) combined with the correlation’s stated accuracy';
+const LWN_WHY = 'log-wake layer with the Kármán-type analogy (Jayatilleke 1969): 10 % in Nu for gases (from memory) combined with the correlation’s stated accuracy';
+const GZ = 'Graetz (1883) series, 24 eigenpairs found by shooting — validation/reference/similarity.ts';
+const GZ_WHY = 'series truncation below 1e-6; the tolerance is the correlation’s stated accuracy';
+const AIR = 'Air(T={T}, P={P})';
+const AIR_CITE = 'Lemmon et al. (2000) equation of state, Lemmon & Jacobsen (2004) transport, computed by python3-iapws';
+
+export const PLAN: Planned[] = [
+  // ——— turbulent pipe heat transfer ———
+  ind('pipe-turbulent-dittus-boelter-heating', 'mixing-length-pipe-nusselt', 0.1, [{ Re_D: 2e4, Pr: 0.7, L_over_D: 60 }, { Re_D: 2e5, Pr: 5, L_over_D: 60 }], ML, ML_WHY),
+  xc('pipe-turbulent-dittus-boelter-heating', 'pipe-turbulent-gnielinski', [{ Re_D: 3e4, Pr: 3, L_over_D: 80 }]),
+  xc('pipe-turbulent-dittus-boelter-heating', 'pipe-turbulent-petukhov', [{ Re_D: 1e5, Pr: 100, L_over_D: 80 }]),
+  ind('pipe-turbulent-dittus-boelter-cooling', 'mixing-length-pipe-nusselt', 0.1, [{ Re_D: 2e4, Pr: 0.7, L_over_D: 60 }, { Re_D: 3e5, Pr: 2, L_over_D: 60 }], ML, ML_WHY),
+  xc('pipe-turbulent-dittus-boelter-cooling', 'pipe-turbulent-gnielinski', [{ Re_D: 1e5, Pr: 0.7, L_over_D: 50 }]),
+  xc('pipe-turbulent-dittus-boelter-cooling', 'pipe-turbulent-petukhov', [{ Re_D: 1e6, Pr: 1.5, L_over_D: 50 }]),
+  ind('pipe-turbulent-gnielinski', 'mixing-length-pipe-nusselt', 0.1, [{ Re_D: 1e4, Pr: 0.7 }, { Re_D: 1e5, Pr: 3 }, { Re_D: 2e6, Pr: 10 }], ML, ML_WHY),
+  xc('pipe-turbulent-gnielinski', 'pipe-turbulent-petukhov', [{ Re_D: 5e4, Pr: 50 }, { Re_D: 4e6, Pr: 1000 }]),
+  ind('pipe-turbulent-petukhov', 'mixing-length-pipe-nusselt', 0.1, [{ Re_D: 1.5e4, Pr: 0.7 }, { Re_D: 3e5, Pr: 7 }], ML, ML_WHY),
+  xc('pipe-turbulent-petukhov', 'pipe-turbulent-gnielinski', [{ Re_D: 5e4, Pr: 20 }, { Re_D: 3e6, Pr: 500 }]),
+  // Sieder–Tate was fitted to liquids: for gases (Pr ≈ 0.7) it lies 30–40 % above the others, so it is checked at liquid Prandtl numbers.
+  ind('pipe-turbulent-sieder-tate', 'mixing-length-pipe-nusselt', 0.1, [{ Re_D: 3e4, Pr: 5, mu_ratio: 1, L_over_D: 60 }, { Re_D: 3e5, Pr: 8, mu_ratio: 1, L_over_D: 60 }], ML, ML_WHY),
+  xc('pipe-turbulent-sieder-tate', 'pipe-turbulent-gnielinski', [{ Re_D: 1e5, Pr: 100, mu_ratio: 1, L_over_D: 60 }]),
+  xc('pipe-turbulent-sieder-tate', 'pipe-turbulent-petukhov', [{ Re_D: 3e4, Pr: 20, mu_ratio: 1, L_over_D: 60 }]),
+
+  // ——— friction ———
+  ind('friction-factor-colebrook', 'mixing-length-pipe-friction', 0.05, [{ Re_D: 1e4, eps_D: 0 }, { Re_D: 1e6, eps_D: 0 }], ML, MLF_WHY),
+  xc('friction-factor-colebrook', 'friction-factor-haaland', [{ Re_D: 2e4, eps_D: 1e-4 }, { Re_D: 1e7, eps_D: 0.02 }]),
+  xc('friction-factor-colebrook', 'friction-factor-swamee-jain', [{ Re_D: 3e5, eps_D: 0.001 }]),
+  ind('friction-factor-haaland', 'mixing-length-pipe-friction', 0.05, [{ Re_D: 5e4, eps_D: 0 }, { Re_D: 3e6, eps_D: 0 }], ML, MLF_WHY),
+  xc('friction-factor-haaland', 'friction-factor-colebrook', [{ Re_D: 8e3, eps_D: 0.01 }, { Re_D: 5e7, eps_D: 0.04 }]),
+  ind('friction-factor-swamee-jain', 'mixing-length-pipe-friction', 0.05, [{ Re_D: 2e4, eps_D: 1e-6 }, { Re_D: 2e6, eps_D: 1e-6 }], ML, MLF_WHY),
+  xc('friction-factor-swamee-jain', 'friction-factor-colebrook', [{ Re_D: 6e3, eps_D: 0.005 }, { Re_D: 5e7, eps_D: 0.008 }]),
+  ind('friction-factor-churchill', 'mixing-length-pipe-friction', 0.05, [{ Re_D: 3e4, eps_D: 0 }, { Re_D: 2e6, eps_D: 0 }], ML, MLF_WHY),
+  xc('friction-factor-churchill', 'friction-factor-colebrook', [{ Re_D: 1e5, eps_D: 0.005 }, { Re_D: 1e7, eps_D: 0.03 }]),
+  xc('friction-factor-churchill', 'friction-factor-laminar', [{ Re_D: 800, eps_D: 0.001 }]),
+  ind('friction-factor-petukhov', 'mixing-length-pipe-friction', 0.05, [{ Re_D: 1e4 }, { Re_D: 1e6 }], ML, MLF_WHY),
+  xc('friction-factor-petukhov', 'friction-factor-colebrook', [{ Re_D: 5e3 }, { Re_D: 4e6 }], { eps_D: 0 }),
+  ind('friction-factor-blasius', 'mixing-length-pipe-friction', 0.05, [{ Re_D: 1e4 }, { Re_D: 8e4 }], ML, MLF_WHY),
+  xc('friction-factor-blasius', 'friction-factor-colebrook', [{ Re_D: 5e3 }, { Re_D: 3e4 }], { eps_D: 0 }),
+  ind('friction-factor-laminar', 'poiseuille-fd-friction', 0, [{ Re_D: 100 }, { Re_D: 2000 }], 'Finite-difference solution of the axial momentum equation, 400 cells — validation/reference/formulas.ts', 'second-order discretization error about 1e-6; the law itself is exact'),
+  xc('friction-factor-laminar', 'friction-factor-churchill', [{ Re_D: 500 }], { eps_D: 0 }),
+
+  // ——— laminar pipe heat transfer ———
+  ind('pipe-laminar-developed-uniform-heat-flux', 'poiseuille-fd-uniform-flux', 0, [{ Re_D: 500, Pr: 0.7, x_over_D: 100 }, { Re_D: 2000, Pr: 10, x_over_D: 2000 }], 'Finite-difference solution of the energy equation with the Poiseuille profile, 400 cells — validation/reference/formulas.ts', 'second-order discretization error about 1e-5; the result itself is exact'),
+  ind('pipe-laminar-entry-hausen', 'graetz-series-mean', 0, [{ Re_D: 1500, Pr: 5, L_over_D: 10 }, { Re_D: 1000, Pr: 0.7, L_over_D: 20 }, { Re_D: 600, Pr: 10, L_over_D: 120 }], GZ, GZ_WHY),
+  xc('pipe-laminar-entry-hausen', 'pipe-laminar-developed-uniform-wall-temperature', [{ Re_D: 200, Pr: 0.7, L_over_D: 400 }], { x_over_D: 400 }),
+  ind('pipe-laminar-entry-sieder-tate', 'graetz-series-mean', 0, [{ Re_D: 500, Pr: 10, L_over_D: 400, mu_ratio: 1 }, { Re_D: 1000, Pr: 20, L_over_D: 1000, mu_ratio: 1 }, { Re_D: 1000, Pr: 50, L_over_D: 1000, mu_ratio: 1 }], GZ, 'the Graetz series holds for a developed velocity profile, which at Pr ≥ 50 develops much faster than the temperature; tolerance = the correlation’s stated accuracy'),
+  xc('pipe-laminar-entry-sieder-tate', 'pipe-laminar-entry-hausen', [{ Re_D: 1500, Pr: 20, L_over_D: 50, mu_ratio: 1 }]),
+
+  // ——— laminar flat plate: limits of the similarity solution ———
+  lim('flat-plate-laminar-local', 'leveque-local', 0.025, [{ Re_x: 1e4, Pr: 1000 }, { Re_x: 3e5, Pr: 5000 }], 'Lévêque (1928) thin-layer limit Pr → ∞ with f″(0) from the Blasius solve — validation/reference/formulas.ts', 'the limit is reached as Pr → ∞; at Pr ≥ 1000 the next term is below 0.5 %; tolerance = the stated accuracy'),
+  xc('flat-plate-laminar-local', 'flat-plate-laminar-local-churchill-ozoe', [{ Re_x: 5e4, Pr: 0.7 }, { Re_x: 2e5, Pr: 50 }]),
+  lim('flat-plate-laminar-average', 'leveque-average', 0.025, [{ Re_L: 1e4, Pr: 1000 }, { Re_L: 4e5, Pr: 3000 }], 'Lévêque (1928) thin-layer limit Pr → ∞, doubled for the length mean — validation/reference/formulas.ts', 'the limit is reached as Pr → ∞; at Pr ≥ 1000 the next term is below 0.5 %; tolerance = the stated accuracy'),
+  lim('flat-plate-laminar-local-churchill-ozoe', 'slug-flow-local', 0.02, [{ Re_x: 5e5, Pr: 0.0002 }, { Re_x: 2e5, Pr: 0.0006 }], 'Pr → 0 limit: uniform velocity across the thermal layer, Nu_x = (Pe_x/π)^½ — validation/reference/formulas.ts', 'reached as Pr → 0; at Pr ≤ 6e-4 the next term is about 1 % (from memory); plus the stated 1 %'),
+  lim('flat-plate-laminar-local-churchill-ozoe', 'leveque-local', 0.015, [{ Re_x: 1e5, Pr: 2000 }], 'Lévêque (1928) thin-layer limit Pr → ∞ — validation/reference/formulas.ts', 'reached as Pr → ∞; at Pr = 2000 the next term is below 0.5 %; plus the stated 1 %'),
+
+  // ——— turbulent flat plate ———
+  ind('skin-friction-turbulent-local', 'log-wake-plate-cf-local', 0.05, [{ Re_x: 6e5 }, { Re_x: 2e6 }, { Re_x: 9e6 }], LW, LW_WHY),
+  ind('skin-friction-turbulent-average', 'log-wake-plate-cf-average', 0.05, [{ Re_L: 6e5 }, { Re_L: 2e6 }, { Re_L: 9e6 }], LW, LW_WHY),
+  xc('skin-friction-turbulent-average', 'skin-friction-mixed-average', [{ Re_L: 9e6 }]),
+  ind('boundary-layer-turbulent-thickness', 'log-wake-plate-thickness', 0.05, [{ Re_x: 6e5 }, { Re_x: 2e6 }, { Re_x: 9e6 }], LW, 'log-wake model uncertainty 5 % (from memory) combined with the stated accuracy'),
+  ind('flat-plate-turbulent-local', 'log-wake-plate-nu-local', 0.1, [{ Re_x: 6e5, Pr: 0.7 }, { Re_x: 3e6, Pr: 0.7 }, { Re_x: 1e7, Pr: 1 }], LW, LWN_WHY),
+  ind('flat-plate-turbulent-average', 'log-wake-plate-nu-average', 0.1, [{ Re_L: 6e5, Pr: 0.7 }, { Re_L: 3e6, Pr: 0.7 }, { Re_L: 2e7, Pr: 1 }], LW, LWN_WHY),
+
+  // ——— laminar flat plate: published constants of the Blasius solution, recalled ———
+  mem('boundary-layer-displacement-laminar', { deltastar_over_x: 1.7208 }, 0.002, [{ Re_x: 1e4 }, { Re_x: 4e5 }], 'Howarth (1938) Proc. R. Soc. A 164:547, table of the Blasius solution: δ* √Re_x / x = 1.7208 (from memory)'),
+  mem('boundary-layer-momentum-laminar', { theta_over_x: 0.6641 }, 0.002, [{ Re_x: 1e4 }, { Re_x: 4e5 }], 'Howarth (1938) Proc. R. Soc. A 164:547, table of the Blasius solution: θ √Re_x / x = 2 f″(0) = 0.6641 (from memory)'),
+  mem('skin-friction-laminar-local', { Cf_x: 0.6641 }, 0.002, [{ Re_x: 2e3 }, { Re_x: 3e5 }], 'Howarth (1938) Proc. R. Soc. A 164:547: f″(0) = 0.33206, so C_f √Re_x = 0.6641 (from memory)'),
+  mem('skin-friction-laminar-average', { Cf_L: 1.3282 }, 0.002, [{ Re_L: 2e3 }, { Re_L: 3e5 }], 'Howarth (1938) Proc. R. Soc. A 164:547: f″(0) = 0.33206, so C_f √Re_L = 1.3282 (from memory)'),
+
+  // ——— laminar flat plate with an unheated start: the limit ξ → 0 is the similarity solution ———
+  lim('flat-plate-unheated-start-laminar-local', 'pohlhausen-local', 0.05, [{ Re_x: 1e5, Pr: 0.7, xi_over_x: 0.001 }, { Re_x: 3e5, Pr: 10, xi_over_x: 0.0001 }], 'ξ/x → 0: Pohlhausen (1921) similarity solution solved numerically — validation/reference/similarity.ts', 'at ξ/x ≤ 1e-3 the step factor is within 0.6 % of 1; tolerance = the stated accuracy'),
+  lim('flat-plate-unheated-start-laminar-average', 'pohlhausen-average', 0.05, [{ Re_L: 1e5, Pr: 0.7, xi_over_L: 0.001 }, { Re_L: 3e5, Pr: 10, xi_over_L: 0.0001 }], 'ξ/L → 0: Pohlhausen (1921) similarity solution solved numerically — validation/reference/similarity.ts', 'at ξ/L ≤ 1e-3 the step factor is within 1 % of 1; tolerance = the stated accuracy'),
+  lim('flat-plate-unheated-start-turbulent-local', 'log-wake-plate-nu-local', 0.23, [{ Re_x: 1e6, Pr: 0.7, xi_over_x: 0.0001 }, { Re_x: 5e6, Pr: 0.7, xi_over_x: 0.0001 }], LW, 'ξ/x → 0 leaves the turbulent layer of the log-wake solution (step factor within 0.1 % of 1); 10 % model and the stated 20 % combined'),
+  lim('flat-plate-unheated-start-turbulent-average', 'log-wake-plate-nu-average', 0.23, [{ Re_L: 1e6, Pr: 0.7, xi_over_L: 0.0001 }, { Re_L: 5e6, Pr: 0.7, xi_over_L: 0.0001 }], LW, 'ξ/L → 0 leaves the turbulent layer of the log-wake solution (step factor within 0.2 % of 1); 10 % model and the stated 20 % combined'),
+
+  // ——— free convection ———
+  xc('vertical-plate-churchill-chu-laminar', 'vertical-plate-churchill-chu', [{ Ra_L: 1e4, Pr: 0.7 }, { Ra_L: 1e7, Pr: 7 }]),
+  // Near Ra_L = 1e9 the two Churchill–Chu forms part by 20–35 % (the laminar form is the better one there, as the notes say): checked below 1e7.
+  xc('vertical-plate-churchill-chu', 'vertical-plate-churchill-chu-laminar', [{ Ra_L: 1e3, Pr: 0.7 }, { Ra_L: 1e6, Pr: 100 }]),
+  xc('enclosure-vertical-catton', 'enclosure-vertical-macgregor-emery', [{ Ra_L: 3e4, Pr: 5, H_over_L: 10 }, { Ra_L: 5e6, Pr: 100, H_over_L: 10 }]),
+  xc('enclosure-vertical-macgregor-emery', 'enclosure-vertical-catton', [{ Ra_L: 2e5, Pr: 2, H_over_L: 10 }, { Ra_L: 8e6, Pr: 1000, H_over_L: 10 }]),
+
+  // ——— spheres and cylinders ———
+  lim('sphere-forced-ranz-marshall', 'conduction-sphere', 0.25, [{ Re_D: 0.01, Pr: 1 }, { Re_D: 0.001, Pr: 10 }], 'Re_D → 0: steady conduction from a sphere into an infinite still medium, Nu_D = 2 (exact) — validation/reference/formulas.ts', 'reached as Re_D → 0 (convection adds about Pe/2, Acrivos & Taylor 1962); tolerance = the stated accuracy'),
+  xc('sphere-forced-ranz-marshall', 'sphere-forced-whitaker', [{ Re_D: 10, Pr: 0.72 }, { Re_D: 150, Pr: 50 }], { mu_ratio: 1 }),
+  xc('sphere-forced-whitaker', 'sphere-forced-ranz-marshall', [{ Re_D: 20, Pr: 0.71, mu_ratio: 1 }, { Re_D: 190, Pr: 200, mu_ratio: 1 }]),
+  xc('cylinder-crossflow-churchill-bernstein', 'cylinder-crossflow-hilpert', [{ Re_D: 100, Pr: 0.7 }, { Re_D: 2e4, Pr: 0.7 }]),
+  xc('cylinder-crossflow-churchill-bernstein', 'cylinder-crossflow-zukauskas', [{ Re_D: 5e3, Pr: 7 }], { Pr_s: 7 }),
+  xc('cylinder-crossflow-hilpert', 'cylinder-crossflow-churchill-bernstein', [{ Re_D: 300, Pr: 0.7 }, { Re_D: 1e5, Pr: 0.7 }]),
+  xc('cylinder-crossflow-hilpert', 'cylinder-crossflow-zukauskas', [{ Re_D: 3e3, Pr: 2 }], { Pr_s: 2 }),
+  xc('cylinder-crossflow-zukauskas', 'cylinder-crossflow-churchill-bernstein', [{ Re_D: 2e4, Pr: 0.7, Pr_s: 0.7 }, { Re_D: 500, Pr: 50, Pr_s: 50 }]),
+  xc('cylinder-crossflow-zukauskas', 'cylinder-crossflow-hilpert', [{ Re_D: 1e5, Pr: 0.7, Pr_s: 0.7 }]),
+
+  // ——— gas properties against the standard formulation ———
+  std('ideal-gas-density', { rho: AIR + '.rho' }, 0.005, [{ p: 1e5, T: 250, M: 0.0289647, P: 0.1 }, { p: 1e6, T: 300, M: 0.0289647, P: 1 }, { p: 101325, T: 1000, M: 0.0289647, P: 0.101325 }], 'the stated 0.5 % for the compressibility of air'),
+  std('gas-kinematic-property-pressure-correction', { nu: AIR + '.nu', alpha: AIR + '.alfa' }, 0.01, [
+    { T: 300, P: 0.5, nu_ref: 'Air(T=300, P=0.101325).nu', alpha_ref: 'Air(T=300, P=0.101325).alfa', p_ref: 101325, p: 5e5 },
+    { T: 450, P: 1, nu_ref: 'Air(T=450, P=0.101325).nu', alpha_ref: 'Air(T=450, P=0.101325).alfa', p_ref: 101325, p: 1e6 },
+    { T: 800, P: 0.02, nu_ref: 'Air(T=800, P=0.101325).nu', alpha_ref: 'Air(T=800, P=0.101325).alfa', p_ref: 101325, p: 2e4 },
+  ], 'the stated 1 % for an ideal gas with pressure-independent μ and k'),
+];
+
+/** The partner's inputs: the case's values for the symbols it shares, then the fixed ones the locator names. */
+export function partnerInputsOf(partner: Definition, inputs: Record<string, number>, fixed: Record<string, number> = {}): Record<string, number> {
+  const all = { ...inputs, ...fixed };
+  return Object.fromEntries(partner.inputs.map((i) => [i.symbol, all[i.symbol]]).filter(([, v]) => v !== undefined));
+}
+
+/** The locator of a planned case: where the test finds its value again. */
+function locatorOf(p: Planned, inputs: Record<string, number | string>): string {
+  if (p.kind === 'cross-check') return `correlation:${p.partner}${p.partnerInputs ? `?${Object.entries(p.partnerInputs).map(([k, v]) => `${k}=${v}`).join('&')}` : ''}`;
+  if (p.python) return `python3-iapws: ${Object.entries(p.python).map(([s, e]) => `${s} = ${fill(e, inputs)}`).join('; ')}`.slice(0, 200);
+  if (p.kind === 'memory') return 'Howarth (1938), table of the Blasius function (recalled)';
+  return `validation/reference/formulas.ts#${p.reference}`;
+}
+
+const fill = (expr: string, inputs: Record<string, number | string>) => expr.replace(/\{(\w+)\}/g, (_, k: string) => String(inputs[k]));
+const fmt = (v: number) => (Math.abs(v) >= 1e4 || (Math.abs(v) < 1e-2 && v !== 0) ? v.toExponential().replace('e+', 'e') : String(v));
+const up = (x: number) => Math.ceil(x * 1000 - 1e-9) / 1000;
+
+/**
+ * Builds every planned check case from the library as it is. `python` evaluates python3-iapws
+ * expressions (one batch); it is called only when the plan holds standard-formulation cases.
+ */
+export function plannedCases(library: LibraryEntry[], python: (exprs: string[]) => number[] = () => []): Map<string, CheckCase[]> {
+  const bySlug = new Map(library.map((e) => [e.slug, e]));
+  const out = new Map<string, CheckCase[]>();
+  const pyExprs: string[] = [];
+  for (const p of PLAN) for (const pt of p.points) {
+    for (const v of Object.values(pt)) if (typeof v === 'string') pyExprs.push(v);
+    if (p.python) for (const e of Object.values(p.python)) pyExprs.push(fill(e, pt));
+  }
+  const pyValues = pyExprs.length ? python(pyExprs) : [];
+  const py = new Map(pyExprs.map((e, i) => [e, pyValues[i]]));
+  for (const p of PLAN) {
+    const own = bySlug.get(p.slug);
+    if (!own) throw new Error(`evidence plan: no library entry ${p.slug}`);
+    const def = own.definition as unknown as Definition;
+    const outputs = def.outputs.map((o) => o.symbol);
+    for (const pt of p.points) {
+      const symbols = new Set(def.inputs.map((i) => i.symbol));
+      // A point may carry helper values for the python expressions (T, P) that are not inputs.
+      const inputs = Object.fromEntries(Object.entries(pt).filter(([k]) => symbols.has(k)).map(([k, v]) => [k, typeof v === 'string' ? py.get(v)! : v]));
+      let expected: Record<string, number>;
+      let rel: number;
+      let citation = p.citation;
+      let why = p.why;
+      if (p.kind === 'cross-check') {
+        const partner = bySlug.get(p.partner!);
+        if (!partner) throw new Error(`evidence plan: ${p.slug} names an unknown partner ${p.partner}`);
+        const pdef = partner.definition as unknown as Definition;
+        const result = compiled(pdef).evaluate(partnerInputsOf(pdef, inputs, p.partnerInputs));
+        if (result.warnings.length) throw new Error(`evidence plan: ${p.slug} × ${p.partner} at ${JSON.stringify(inputs)} leaves the partner's range (${result.warnings.map((w) => w.symbol).join(', ')})`);
+        expected = Object.fromEntries(outputs.filter((s) => result.outputs[s] !== undefined).map((s) => [s, result.outputs[s]]));
+        const t = crossCheckTolerance({ slug: p.slug, accuracy: def.accuracy }, { slug: p.partner!, accuracy: pdef.accuracy });
+        if (t === null) throw new Error(`evidence plan: ${p.slug} × ${p.partner}: both need a stated accuracy`);
+        rel = t;
+        const a = def.accuracy!;
+        const b = pdef.accuracy!;
+        citation = `${pdef.title} — another approved correlation in the library`;
+        why = a.approximates === p.partner ? `this form approximates ${p.partner} within ${a.rel * 100} % (stated)`
+          : b.approximates === p.slug ? `${p.partner} approximates this one within ${b.rel * 100} % (stated)`
+            : `√(${a.rel * 100} %² + ${b.rel * 100} %²): the two stated accuracies combined as independent errors`;
+      } else if (p.kind === 'memory') {
+        // Recalled coefficients of the Blasius solution, scaled by Re^(−½) of the point.
+        const re = Object.values(inputs)[0];
+        expected = Object.fromEntries(Object.entries(p.values!).map(([s, v]) => [s, v / Math.sqrt(re)]));
+        rel = p.tolerance!;
+      } else if (p.python) {
+        expected = Object.fromEntries(Object.entries(p.python).map(([s, e]) => [s, py.get(fill(e, pt))!]));
+        rel = p.tolerance!;
+        citation = AIR_CITE;
+      } else {
+        const values = REFERENCES[p.reference!](inputs);
+        expected = Object.fromEntries(outputs.filter((s) => values[s] !== undefined).map((s) => [s, values[s]]));
+        rel = p.kind === 'independent-solution' ? up(Math.max(Math.hypot(def.accuracy?.rel ?? 0, p.model ?? 0), 1e-4)) : p.tolerance!;
+      }
+      if (!Object.keys(expected).length) throw new Error(`evidence plan: ${p.slug} ← ${p.partner ?? p.reference}: no output in common`);
+      const label = `${p.kind === 'cross-check' ? `vs ${p.partner}` : p.kind === 'standard-formulation' ? 'standard formulation' : p.kind === 'limit' ? `limit (${p.reference})` : p.kind === 'memory' ? 'recalled Blasius constant' : `independent (${p.reference})`} at ${Object.entries(inputs).map(([k, v]) => `${k} = ${fmt(v)}`).join(', ')}`;
+      const c: CheckCase = {
+        label: label.slice(0, 200),
+        inputs,
+        expected,
+        tolerance: { rel, why },
+        source: { kind: p.kind, citation, locator: locatorOf(p, pt) },
+      };
+      out.set(p.slug, [...(out.get(p.slug) ?? []), c]);
+    }
+  }
+  return out;
+}
+
+/** Whether a check case in a library file is one the plan writes (and so rewrites). */
+export function isPlanned(c: CheckCase): boolean {
+  const l = c.source.locator ?? '';
+  return l.startsWith('correlation:') || l.startsWith('python3-iapws:') || (c.source.kind === 'memory' && c.label.startsWith('recalled Blasius constant')) || PLAN.some((p) => p.reference && l === `validation/reference/formulas.ts#${p.reference}` && (p.kind === 'independent-solution' || p.kind === 'limit') && c.label.startsWith(p.kind === 'limit' ? 'limit (' : 'independent ('));
+}
+
+/** Python source that evaluates a JSON list of python3-iapws expressions read from standard input. */
+export const PYTHON_EVAL = `
+import json, sys
+from iapws import IAPWS95
+from iapws.humidAir import Air
+print(json.dumps([eval(e, {'__builtins__': {}}, {'Air': Air, 'IAPWS95': IAPWS95}) for e in json.load(sys.stdin)]))
+`;
