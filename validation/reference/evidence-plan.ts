@@ -147,6 +147,19 @@ export const PLAN: Planned[] = [
   xc('cylinder-crossflow-zukauskas', 'cylinder-crossflow-churchill-bernstein', [{ Re_D: 2e4, Pr: 0.7, Pr_s: 0.7 }, { Re_D: 500, Pr: 50, Pr_s: 50 }]),
   xc('cylinder-crossflow-zukauskas', 'cylinder-crossflow-hilpert', [{ Re_D: 1e5, Pr: 0.7, Pr_s: 0.7 }]),
 
+  // ——— added partners: uniform-flux plate, logarithmic skin friction, gas-flow turbulent plate, sphere in air ———
+  ind('flat-plate-laminar-local-uniform-flux-churchill-ozoe', 'uniform-flux-local', 0, [{ Re_x: 1e4, Pr: 0.7 }, { Re_x: 3e5, Pr: 10 }], 'Similarity solution for a uniform wall flux (wall temperature ∝ x^½), solved numerically — validation/reference/similarity.ts', 'numerical solution to 1e-6; tolerance = the stated accuracy'),
+  lim('flat-plate-laminar-local-uniform-flux-churchill-ozoe', 'slug-flow-local-uniform-flux', 0.02, [{ Re_x: 5e5, Pr: 0.0002 }, { Re_x: 4e5, Pr: 0.00025 }], 'Pr → 0 limit with a uniform flux: conduction into a uniform stream, Nu_x = (√π/2) Pe_x^½ — validation/reference/formulas.ts', 'reached as Pr → 0; at Pr ≤ 6e-4 the next term is about 1 % (from memory); plus the stated 1 %'),
+  xc('flat-plate-laminar-local-uniform-flux', 'flat-plate-laminar-local-uniform-flux-churchill-ozoe', [{ Re_x: 2e4, Pr: 0.7 }, { Re_x: 4e5, Pr: 30 }]),
+  ind('skin-friction-turbulent-local-schultz-grunow', 'log-wake-plate-cf-local', 0.05, [{ Re_x: 6e5 }, { Re_x: 1e7 }, { Re_x: 3e8 }], LW, LW_WHY),
+  xc('skin-friction-turbulent-local-schultz-grunow', 'skin-friction-turbulent-local', [{ Re_x: 1e6 }]),
+  xc('skin-friction-turbulent-local', 'skin-friction-turbulent-local-schultz-grunow', [{ Re_x: 7e5 }, { Re_x: 8e6 }]),
+  ind('flat-plate-turbulent-local-gas', 'log-wake-plate-nu-local', 0.1, [{ Re_x: 6e5, Pr: 0.7 }, { Re_x: 4e6, Pr: 0.9 }], LW, LWN_WHY),
+  xc('flat-plate-turbulent-local-gas', 'flat-plate-turbulent-local', [{ Re_x: 1e6, Pr: 0.7 }]),
+  xc('flat-plate-turbulent-local', 'flat-plate-turbulent-local-gas', [{ Re_x: 8e5, Pr: 0.7 }, { Re_x: 4e6, Pr: 1 }]),
+  xc('sphere-natural-yuge', 'sphere-natural-churchill', [{ Ra_D: 10 }, { Ra_D: 1e3 }, { Ra_D: 8e4 }], { Pr: 0.71 }),
+  xc('sphere-natural-churchill', 'sphere-natural-yuge', [{ Ra_D: 30, Pr: 0.71 }, { Ra_D: 5e4, Pr: 0.71 }]),
+
   // ——— gas properties against the standard formulation ———
   std('ideal-gas-density', { rho: AIR + '.rho' }, 0.005, [{ p: 1e5, T: 250, M: 0.0289647, P: 0.1 }, { p: 1e6, T: 300, M: 0.0289647, P: 1 }, { p: 101325, T: 1000, M: 0.0289647, P: 0.101325 }], 'the stated 0.5 % for the compressibility of air'),
   std('gas-kinematic-property-pressure-correction', { nu: AIR + '.nu', alpha: AIR + '.alfa' }, 0.01, [

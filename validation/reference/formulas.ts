@@ -226,3 +226,8 @@ export function isRetypedCrossCheck(slug: string, c: { source: { kind: string; l
   const key = referenceKey(c.source.locator);
   return Boolean(key && key !== slug && c.source.kind !== 'transcription' && (key === 'gnielinski-independent' || slugs.includes(key)));
 }
+
+Object.assign(REFERENCES, {
+  // Pr → 0 with a uniform wall flux: conduction into a slug-flow layer, Nu_x = (√π/2) Pe_x^½.
+  'slug-flow-local-uniform-flux': ({ Re_x, Pr }: Inputs) => ({ Nu_x: (Math.sqrt(Math.PI) / 2) * Math.sqrt(Re_x * Pr) }),
+});
