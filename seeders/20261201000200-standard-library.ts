@@ -31,7 +31,7 @@ export async function up(): Promise<void> {
     }
     // Entries whose independent evidence is still below the policy are signed with a waiver that says so.
     const waiver = evidence && !evidence.meetsPolicy
-      ? `Standard library entry seeded before the evidence policy: ${evidence.independent} independent in-range check case(s) of ${evidence.kinds} kind(s), below ${evidence.policy.minimumIndependent} of ${evidence.policy.minimumKinds}. Published values are to be added before the waiver is lifted.`
+      ? `Standard library entry below the evidence policy: ${evidence.independent} independent in-range check case(s) of ${evidence.kinds} kind(s) (${Object.entries(evidence.byKind).filter(([k]) => k !== 'transcription').map(([k, n]) => `${k} ${n}`).join(', ') || 'none'}), below ${evidence.policy.minimumIndependent} of ${evidence.policy.minimumKinds}. Approved for continuity of the library; a second kind of evidence (published data with its locator or an independent solution) is to be added before the waiver is lifted.`
       : undefined;
     await decideVersion({ actor: approver, slug: entry.slug, version: 1, decision: 'approve', comment: 'Standard library: definition, references and check cases reviewed.', password: DEMO_PASSWORD, waiver });
   }

@@ -19,8 +19,18 @@ export function EvidenceSummary({ evidence }: { evidence: Evidence | undefined }
         {evidence.independent} independent in-range check case{evidence.independent === 1 ? '' : 's'} of {evidence.kinds} kind{evidence.kinds === 1 ? '' : 's'}
         {' '}(policy: {evidence.policy.minimumIndependent} of {evidence.policy.minimumKinds}); by kind: {kinds.map(([k, n]) => `${k} ${n}`).join(', ') || 'none'}
         {(evidence.byKind.transcription ?? 0) > 0 && ' (transcriptions catch typos and count for nothing)'}; coverage of the validity ranges {Math.round(evidence.coverage * 100)} %.
-        {evidence.accuracy ? ` Stated accuracy ±${(evidence.accuracy.rel * 100).toPrecision(2)} % (${evidence.accuracy.basis})${evidence.toleranceOverAccuracy !== null ? `; loosest check tolerance ${evidence.toleranceOverAccuracy.toPrecision(2)}× that accuracy` : ''}.` : ' No stated accuracy.'}
       </p>
+      <p className="mt-1 text-xs" data-testid="stated-accuracy">{accuracyText(evidence)}</p>
     </div>
   );
+}
+
+/** The stated accuracy in words: a band on data, a deviation from the correlation approximated, or exact within its model. */
+export function accuracyText(evidence: Pick<Evidence, 'accuracy' | 'toleranceOverAccuracy'>): string {
+  const a = evidence.accuracy;
+  if (!a) return 'No stated accuracy.';
+  const pct = `±${Number((a.rel * 100).toPrecision(2))} %`;
+  const head = a.rel === 0 ? 'Exact within the model it states' : a.approximates ? `Stated accuracy: within ${pct} of ${a.approximates}` : `Stated accuracy: ${pct} on data`;
+  const loose = evidence.toleranceOverAccuracy !== null ? `; loosest in-range check tolerance ${evidence.toleranceOverAccuracy.toPrecision(2)}× that accuracy` : '';
+  return `${head} — ${a.basis}${loose}.`;
 }

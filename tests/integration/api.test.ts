@@ -44,6 +44,30 @@ describe('integrator API', () => {
     }
   });
 
+  it('shows the evidence of every approved standard-library version: grade, counts by kind, stated accuracy, and the waiver where it is below the policy', async () => {
+    const { readLibrary } = await import('@/lib/governance/library');
+    const { CorrelationVersion, Correlation, SignOff } = db();
+    for (const { slug, definition } of readLibrary()) {
+      const c = await Correlation.findOne({ where: { slug } });
+      const v = await CorrelationVersion.findOne({ where: { correlationId: c!.id, status: 'approved' }, order: [['version', 'DESC']] });
+      const res = await call(`/api/correlations/${slug}/versions/${v!.version}`, { token: readOnly });
+      expect(res.status, slug).toBe(200);
+      const e = res.body.evidence;
+      expect(['well-founded', 'adequate', 'thin'], slug).toContain(e.grade);
+      expect(e.independent, slug).toBe(Object.entries(e.byKind).filter(([k]) => k !== 'transcription').reduce((n, [, x]) => n + (x as number), 0));
+      // The stated accuracy travels from the definition to the API unchanged (version 1 of each file).
+      if (v!.version === 1) expect(e.accuracy, slug).toEqual((definition as { accuracy?: unknown }).accuracy ?? null);
+      if (!e.meetsPolicy) {
+        const signOff = await SignOff.findOne({ where: { versionId: v!.id, decision: 'approved' } });
+        expect(signOff?.waiver, `${slug}: below the policy, approved with a waiver`).toMatch(/independent in-range/);
+      }
+    }
+    const gn = (await call('/api/correlations/pipe-turbulent-gnielinski/versions/1', { token: readOnly })).body.evidence;
+    expect(gn.accuracy.rel).toBe(0.1);
+    expect(gn.meetsPolicy).toBe(true);
+    expect(gn.byKind['independent-solution']).toBeGreaterThanOrEqual(3);
+  });
+
   it('needs the evaluate scope to evaluate, and read to list', async () => {
     const res = await call(`/api/correlations/${CB}/evaluate`, { token: readOnly, body });
     expect(res.status).toBe(403);
