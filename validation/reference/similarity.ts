@@ -134,34 +134,7 @@ function powerLawWallNusseltCoefficientSolved(pr: number, n: number): number {
  * φ'(0) = 0, φ(1) = 0; Nu_D = λ₀²/2 for the first eigenvalue (Shah & London 1978 give 3.6568).
  */
 export function graetzNusseltUWT(): number {
-  const phiAtWall = (lambda: number) => {
-    const steps = 20000;
-    const h = 1 / steps;
-    // Series start away from the axis: φ ≈ 1 − λ² r²/4.
-    let r = 1e-6;
-    let phi = 1 - (lambda * lambda * r * r) / 4;
-    let dphi = -(lambda * lambda * r) / 2;
-    const acc = (rr: number, p: number, dp: number) => -dp / rr - lambda * lambda * (1 - rr * rr) * p;
-    for (let i = 0; i < steps; i++) {
-      const hh = Math.min(h, 1 - r);
-      if (hh <= 0) break;
-      const k1 = [dphi, acc(r, phi, dphi)];
-      const k2 = [dphi + (hh / 2) * k1[1], acc(r + hh / 2, phi + (hh / 2) * k1[0], dphi + (hh / 2) * k1[1])];
-      const k3 = [dphi + (hh / 2) * k2[1], acc(r + hh / 2, phi + (hh / 2) * k2[0], dphi + (hh / 2) * k2[1])];
-      const k4 = [dphi + hh * k3[1], acc(r + hh, phi + hh * k3[0], dphi + hh * k3[1])];
-      phi += (hh / 6) * (k1[0] + 2 * k2[0] + 2 * k3[0] + k4[0]);
-      dphi += (hh / 6) * (k1[1] + 2 * k2[1] + 2 * k3[1] + k4[1]);
-      r += hh;
-    }
-    return phi;
-  };
-  let lo = 2;
-  let hi = 3;
-  for (let i = 0; i < 60; i++) {
-    const mid = (lo + hi) / 2;
-    if (phiAtWall(lo) * phiAtWall(mid) <= 0) hi = mid; else lo = mid;
-  }
-  const lambda = (lo + hi) / 2;
+  const { lambda } = graetzPairs()[0];
   return (lambda * lambda) / 2;
 }
 
