@@ -7,7 +7,7 @@
  * ("validation/reference/formulas.ts#<key>"); validation/library.test.ts recomputes it.
  */
 import { mixingLengthPipe, turbulentLayer, turbulentLayerNusselt } from './turbulence';
-import { blasius, graetzMeanNusselt, graetzNusseltUWT, ostrachG, pohlhausenNusseltCoefficient, powerLawWallNusseltCoefficient, thermalThicknessEta } from './similarity';
+import { blasius, graetzMeanNusselt, graetzNusseltUWT, levequeUniformFluxCoefficient, ostrachG, pohlhausenNusseltCoefficient, powerLawWallNusseltCoefficient, thermalThicknessEta } from './similarity';
 
 type Inputs = Record<string, number>;
 type Values = Record<string, number>;
@@ -230,4 +230,16 @@ export function isRetypedCrossCheck(slug: string, c: { source: { kind: string; l
 Object.assign(REFERENCES, {
   // Pr → 0 with a uniform wall flux: conduction into a slug-flow layer, Nu_x = (√π/2) Pe_x^½.
   'slug-flow-local-uniform-flux': ({ Re_x, Pr }: Inputs) => ({ Nu_x: (Math.sqrt(Math.PI) / 2) * Math.sqrt(Re_x * Pr) }),
+});
+
+Object.assign(REFERENCES, {
+  // Pr → ∞ with a uniform wall flux (similarity.ts#levequeUniformFluxCoefficient); ΔT ∝ x^½ so the length mean is 1.5 × the local value at L.
+  'leveque-uniform-flux-local': ({ Re_x, Pr }: Inputs) => ({ Nu_x: levequeUniformFluxCoefficient() * Math.sqrt(Re_x) * Math.cbrt(Pr) }),
+  'leveque-uniform-flux-average': ({ Re_L, Pr }: Inputs) => ({ Nu_L: 1.5 * levequeUniformFluxCoefficient() * Math.sqrt(Re_L) * Math.cbrt(Pr) }),
+  // Lighthill (1950) Proc. R. Soc. A 202:359: thin-layer (Pr → ∞) heat flux after a step in wall temperature at ξ under a wall
+  // shear τ(x): q ∝ τ^½ / (∫_ξ^x τ^½ dx′)^⅓; with τ ∝ x^(−½) (Blasius) the factor is exactly [1 − (ξ/x)^¾]^(−⅓).
+  'lighthill-step-local': ({ Re_x, Pr, xi_over_x }: Inputs) => ({ Nu_x: (levequeCoefficient() * Math.sqrt(Re_x) * Math.cbrt(Pr)) / Math.cbrt(1 - xi_over_x ** 0.75) }),
+  'lighthill-step-average': ({ Re_L, Pr, xi_over_L }: Inputs) => ({
+    Nu_L: averageOfLocal((xi) => (levequeCoefficient() * Math.sqrt(Re_L * xi) * Math.cbrt(Pr)) / Math.cbrt(1 - (xi_over_L / xi) ** 0.75), xi_over_L),
+  }),
 });

@@ -286,3 +286,38 @@ export function graetzMeanNusselt(lOverDOverRePr: number): number {
   const thetaM = graetzPairs().reduce((s, p) => s + p.weight * Math.exp((-p.lambda * p.lambda * zeta) / 2), 0);
   return -Math.log(thetaM) / zeta;
 }
+
+/**
+ * Lévêque (1928) thin-layer limit Pr → ∞ for a uniform wall flux on a flat plate: in the thermal layer the
+ * velocity is the wall shear's, u = a(x) y with a = U f″(0) (U/νx)^½, and continuity gives v = −a′ y²/2
+ * (not negligible: a varies with x). With ζ = y/g(x), g³ = α/(U f″(0) (U/ν)^½) · x^{3/2}, and
+ * T − T_∞ = (q g/k) θ(ζ), the energy equation u T_x + v T_y = α T_yy becomes θ″ = ½ ζ θ − ¼ ζ² θ′,
+ * θ′(0) = −1, θ′(∞) = 0 (the other solution grows as ζ²). Nu_x = f″(0)^⅓ Re_x^½ Pr^⅓ / θ(0).
+ * The same scaling for an isothermal wall gives θ″ = −¼ ζ² θ′ and Lighthill's (f″(0)/12)^⅓/Γ(4/3) = 0.3387.
+ * Returns the coefficient f″(0)^⅓/θ(0), by RK4 shooting on θ(0) (the problem is linear in it).
+ */
+let uniformFluxLeveque: number | undefined;
+export function levequeUniformFluxCoefficient(): number {
+  if (uniformFluxLeveque !== undefined) return uniformFluxLeveque;
+  const run = (t0: number) => {
+    const h = 1e-3;
+    let t = t0;
+    let tp = -1;
+    const acc = (z: number, a: number, b: number) => 0.5 * z * a - 0.25 * z * z * b;
+    for (let i = 0; i < 8000; i++) {
+      const z = i * h;
+      const k1 = [tp, acc(z, t, tp)];
+      const k2 = [tp + (h / 2) * k1[1], acc(z + h / 2, t + (h / 2) * k1[0], tp + (h / 2) * k1[1])];
+      const k3 = [tp + (h / 2) * k2[1], acc(z + h / 2, t + (h / 2) * k2[0], tp + (h / 2) * k2[1])];
+      const k4 = [tp + h * k3[1], acc(z + h, t + h * k3[0], tp + h * k3[1])];
+      t += (h / 6) * (k1[0] + 2 * k2[0] + 2 * k3[0] + k4[0]);
+      tp += (h / 6) * (k1[1] + 2 * k2[1] + 2 * k3[1] + k4[1]);
+    }
+    return tp;
+  };
+  const a = run(0);
+  const b = run(1);
+  const theta0 = -a / (b - a);
+  uniformFluxLeveque = Math.cbrt(blasius().fpp0) / theta0;
+  return uniformFluxLeveque;
+}
