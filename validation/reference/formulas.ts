@@ -243,3 +243,26 @@ Object.assign(REFERENCES, {
     Nu_L: averageOfLocal((xi) => (levequeCoefficient() * Math.sqrt(Re_L * xi) * Math.cbrt(Pr)) / Math.cbrt(1 - (xi_over_L / xi) ** 0.75), xi_over_L),
   }),
 });
+
+/**
+ * Laminar thin-layer free convection from horizontal cylinders and spheres, by the transformation that maps a
+ * curved body's boundary layer onto the vertical plate's (Acrivos 1960; Lin & Chao 1974; Raithby & Hollands 1975):
+ * the local flux goes as (sin φ)^⅓ r^⅓ / [∫ (sin φ)^⅓ r^(4/3) ds]^¼ (r = 1 for a 2-D body). Averaged over the
+ * surface, Nu_D = F · C(Pr) · Ra_D^¼ with C(Pr) = (4/3) g(Pr)/(4 Pr)^¼ the plate's mean coefficient from Ostrach's
+ * similarity solution (similarity.ts), F = (2/π) [∫₀^π sin^⅓ φ dφ]^¾ / 8^¼ for the cylinder and
+ * [∫₀^π sin^(5/3) φ dφ]^¾ / 8^¼ for the sphere, both by quadrature here. The thin layer leaves out conduction
+ * through a layer of finite thickness; Raithby & Hollands' correction adds it back: Nu = 2/ln(1 + 2/Nu_T) for the
+ * cylinder (Langmuir's film), Nu = 2 + Nu_T for the sphere (its exact conduction limit). Laminar flow only.
+ */
+const thinLayerFactor = (power: number, twoD: boolean) => {
+  const integral = simpson((p) => Math.sin(p) ** power, 0, Math.PI, 20000);
+  return ((twoD ? 2 / Math.PI : 1) * integral ** 0.75) / 8 ** 0.25;
+};
+const plateMeanCoefficient = (pr: number) => ((4 / 3) * ostrachG(pr)) / (4 * pr) ** 0.25;
+Object.assign(REFERENCES, {
+  'thin-layer-horizontal-cylinder': ({ Ra_D, Pr }: Inputs) => {
+    const thin = thinLayerFactor(1 / 3, true) * plateMeanCoefficient(Pr ?? 0.71) * Ra_D ** 0.25;
+    return { Nu_D: 2 / Math.log(1 + 2 / thin) };
+  },
+  'thin-layer-sphere': ({ Ra_D, Pr }: Inputs) => ({ Nu_D: 2 + thinLayerFactor(5 / 3, false) * plateMeanCoefficient(Pr ?? 0.71) * Ra_D ** 0.25 }),
+});
