@@ -85,7 +85,7 @@ export const versionAnswer = z.object({
   evidence: z.object({
     grade: z.enum(GRADES), meaning: z.string(), byKind: z.record(z.string(), z.number()), independent: z.number().int(), kinds: z.number().int(),
     published: z.boolean(), coverage: z.number(), toleranceOverAccuracy: z.number().nullable(),
-    accuracy: z.object({ rel: z.number(), basis: z.string(), approximates: z.string().optional() }).nullable(),
+    accuracy: z.object({ rel: z.number(), basis: z.string(), approximates: z.string().optional(), byOutput: z.record(z.string(), z.number()).optional() }).nullable(),
     policy: z.object({ minimumIndependent: z.number().int(), minimumKinds: z.number().int() }), meetsPolicy: z.boolean(),
   }).nullable().describe('what the check cases prove: in-range passing cases by kind, coverage, the grade and the policy'),
 });

@@ -32,7 +32,8 @@ interface LeafRuntime {
   /** What the step reads, under the name and in the unit it takes it (value = a·v[slot] + b), and writes. */
   reads: { name: string; slot: number; unit: string; a: number; b: number }[];
   writes: { symbol: string; slot: number; unit: string }[];
-  run(v: Float64Array, sink: ChainWarning[] | null): void;
+  /** `scale` (by slot), when given, multiplies a correlation step's outputs: the perturbation a Monte Carlo run applies. */
+  run(v: Float64Array, sink: ChainWarning[] | null, scale?: Float64Array | null): void;
 }
 
 interface ChoiceRuntime {
@@ -61,8 +62,11 @@ export interface CompiledChain {
   readInputs(inputs: unknown, path: string): Float64Array;
   /** Outputs and every warning (with its step), as the check cases and the single API answer need. */
   evaluate(inputs: Record<string, unknown>): { outputs: Record<string, number>; warnings: ChainWarning[] };
-  /** One run with the record of every step. */
-  runDetailed(values: ArrayLike<number>): ChainResult;
+  /**
+   * One run with the record of every step. `factors` multiplies the named outputs of correlation
+   * steps (by chain symbol): how a Monte Carlo run perturbs each correlation within its band.
+   */
+  runDetailed(values: ArrayLike<number>, factors?: Record<string, number>): ChainResult;
   /** Many rows (inputs flat in declared order): outputs flat; per-row warnings, errors and picks sparse. */
   runMany(rows: Float64Array, count: number): {
     outputs: Float64Array; warnings: Map<number, ChainWarning[]>; errors: Map<number, EvaluationError>;
@@ -171,14 +175,14 @@ export function compileChain(def: TemplateDefinition, resolve: Resolve): Compile
     };
     return {
       cost: c.rowCost, steps: c.stepsPerRow, key, title: step.title, kind: 'correlation', pin: step.use, reads, writes,
-      run(v, s) {
+      run(v, s, scale) {
         sink = s;
         for (let i = 0; i < nIn; i++) { const k = conversions[i]; work[i] = k.a * v[k.slot] + k.b; }
         c.exec(work, W);
         for (const o of outputCopies) {
           const x = work[o.from];
           if (!Number.isFinite(x)) throw new EvaluationError('not-finite', `step "${key}": ${o.symbol} cannot be computed for these inputs (the correlation gives ${x})`, o.symbol, sink ?? []);
-          v[o.to] = x;
+          v[o.to] = scale ? x * scale[o.to] : x;
         }
       },
     };
@@ -308,7 +312,7 @@ export function compileChain(def: TemplateDefinition, resolve: Resolve): Compile
    * Runs the chain on v (inputs filled in). `picks` receives the option index of each choice;
    * `onLeaf` (detailed runs only) sees each executed step with the warning count before it.
    */
-  const exec = (v: Float64Array, sink: ChainWarning[] | null, picks: number[] | null, onLeaf?: OnLeaf): void => {
+  const exec = (v: Float64Array, sink: ChainWarning[] | null, picks: number[] | null, onLeaf?: OnLeaf, scale?: Float64Array | null): void => {
     for (const { lim, slot } of inputLimits) {
       if (!breaks(lim, v[slot])) continue;
       const w: ChainWarning = { ...warningOf(lim, v[slot]), step: 'inputs' };
@@ -319,7 +323,7 @@ export function compileChain(def: TemplateDefinition, resolve: Resolve): Compile
     for (const r of runtime) {
       if (r.kind === 'leaf') {
         const before = sink?.length ?? 0;
-        r.leaf.run(v, sink);
+        r.leaf.run(v, sink, scale);
         onLeaf?.(r.leaf, before);
         continue;
       }
@@ -330,15 +334,20 @@ export function compileChain(def: TemplateDefinition, resolve: Resolve): Compile
       const picked = options[k];
       for (const leaf of picked.leaves) {
         const b = sink?.length ?? 0;
-        leaf.run(v, sink);
+        leaf.run(v, sink, scale);
         onLeaf?.(leaf, b, { key, title, rule, picked: picked.label, options: options.map((o) => o.label) });
       }
     }
   };
 
-  const runDetailed = (values: ArrayLike<number>): ChainResult => {
+  const runDetailed = (values: ArrayLike<number>, factors?: Record<string, number>): ChainResult => {
     const v = new Float64Array(nSlots);
     for (let i = 0; i < nIn; i++) v[i] = values[i];
+    let scale: Float64Array | null = null;
+    if (factors) {
+      scale = new Float64Array(nSlots).fill(1);
+      for (const [symbol, f] of Object.entries(factors)) { const k = slots.get(symbol); if (k !== undefined) scale[k] = f; }
+    }
     const steps: StepRecord[] = [];
     const warnings: ChainWarning[] = [];
     exec(v, warnings, null, (leaf, before, choice) => {
@@ -349,7 +358,7 @@ export function compileChain(def: TemplateDefinition, resolve: Resolve): Compile
         units: Object.fromEntries([...leaf.reads.map((r) => [r.name, r.unit]), ...leaf.writes.map((w) => [w.symbol, w.unit])]),
         warnings: warnings.slice(before),
       });
-    });
+    }, scale);
     const outputs = Object.fromEntries(outputSymbols.map((s, i) => [s, v[outputSlots[i]]]));
     return { steps, outputs, warnings };
   };

@@ -26,7 +26,7 @@ export interface Definition {
  * Stated accuracy. rel 0 marks an exact solution of the model the definition states; with
  * `approximates`, rel is the deviation from that other correlation (an explicit form of an implicit one).
  */
-export interface Accuracy { rel: number; basis: string; approximates?: string }
+export interface Accuracy { rel: number; basis: string; approximates?: string; byOutput?: Record<string, number> }
 
 export const CATEGORIES = [
   'external-flow', 'internal-flow', 'free-convection', 'friction', 'boundary-layer', 'properties',
