@@ -133,6 +133,7 @@ export function propagate(chain: CompiledChain, resolve: (pin: Pin) => CompiledD
   const outputs: Record<string, PropagatedOutput> = {};
   for (const o of def.outputs) {
     const y = scope.get(o.symbol)!;
+    const unit = chain.units.get(o.symbol) ?? '1';
     const budget: BudgetLine[] = sources.map((s, k) => {
       const sensitivity = y.v === 0 ? 0 : y.d[nIn + k] / y.v;
       const contribution = s.band ? Math.abs(sensitivity) * s.band.rel : null;
@@ -143,9 +144,9 @@ export function propagate(chain: CompiledChain, resolve: (pin: Pin) => CompiledD
     budget.sort((a, b) => (b.contribution ?? Infinity) - (a.contribution ?? Infinity));
     const sensitivities = Object.fromEntries(chain.inputSymbols.map((s, i) => {
       const derivative = y.d[i];
-      return [s, { derivative, elasticity: y.v === 0 ? 0 : (derivative * values[i]) / y.v, unit: `${o.unit} per ${chain.units.get(s)}` }];
+      return [s, { derivative, elasticity: y.v === 0 ? 0 : (derivative * values[i]) / y.v, unit: `${unit} per ${chain.units.get(s)}` }];
     }));
-    outputs[o.symbol] = { value: y.v, unit: o.unit, rel: budget.some((l) => l.contribution !== null) ? Math.sqrt(sum) : null, complete: budget.every((l) => l.rel !== null), budget, sensitivities };
+    outputs[o.symbol] = { value: y.v, unit, rel: budget.some((l) => l.contribution !== null) ? Math.sqrt(sum) : null, complete: budget.every((l) => l.rel !== null), budget, sensitivities };
   }
   return { method: PROPAGATION_METHOD, outputs };
 }
