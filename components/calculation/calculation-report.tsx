@@ -8,6 +8,7 @@ import { QueryState } from '@/components/ui/query-state';
 import { Caution } from '@/components/ui/caution';
 import { pinsOf } from '@/lib/engine/template-types';
 import { ResultsTable, StepChain } from './step-chain';
+import { UncertaintyBudget } from './uncertainty-budget';
 import { FlagBanner, inputText, useCalculation } from './calculation-view';
 import { Sym } from './symbol';
 
@@ -49,10 +50,11 @@ export function CalculationReport({ id, revision }: { id: number; revision?: num
                 <section><h2 className="font-semibold">Inputs</h2>
                   <table className="table-plain"><tbody>{content.chain.inputs.map((i) => <tr key={i.symbol}><th scope="row" className="w-24"><Sym s={i.symbol} /></th><td>{i.name}</td><td className="font-mono">{inputText(content.request.inputs?.[i.symbol], i.unit)}</td></tr>)}</tbody></table>
                 </section>
-                <section><h2 className="font-semibold">Results</h2><ResultsTable outputs={a.outputs ?? {}} units={a.units} names={names} warned={(a.warnings?.length ?? 0) > 0} /></section>
+                <section><h2 className="font-semibold">Results</h2><ResultsTable outputs={a.outputs ?? {}} units={a.units} names={names} warned={(a.warnings?.length ?? 0) > 0} bands={a.uncertainty?.outputs} /></section>
                 <section className="space-y-1"><h2 className="font-semibold">Range warnings</h2>
                   {(a.warnings ?? []).length === 0 ? <p className="text-sm">None: every step inside its published validity range.</p> : <ul className="list-disc pl-5 text-sm">{a.warnings!.map((w, k) => <li key={k}>step {w.step}: {w.message}</li>)}</ul>}
                 </section>
+                <UncertaintyBudget uncertainty={a.uncertainty} names={names} />
                 <section className="space-y-2"><h2 className="font-semibold">The chain, step by step</h2><StepChain steps={a.steps ?? []} /></section>
               </>
             )}

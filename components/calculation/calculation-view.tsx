@@ -9,6 +9,7 @@ import { Caution } from '@/components/ui/caution';
 import { CopyButton } from '@/components/ui/copy-button';
 import type { TemplateDefinition } from '@/lib/engine/template-types';
 import { chainNotices, ResultsTable, StepChain } from './step-chain';
+import { UncertaintyBudget } from './uncertainty-budget';
 import { Sym } from './symbol';
 import type { RunAnswer } from './types';
 
@@ -96,8 +97,9 @@ export function CalculationView({ id, revision, justSaved }: { id: number; revis
                 <div className="space-y-4">
                   <section className="space-y-2">
                     <div className="flex items-center gap-3"><h2 className="font-semibold">Results</h2>{warnCount > 0 && <span className="rounded bg-caution-bg px-2 py-0.5 text-sm font-medium text-caution">⚠ {warnCount} range warning{warnCount === 1 ? '' : 's'}</span>}</div>
-                    <ResultsTable outputs={a.outputs ?? {}} units={a.units} names={names} warned={warnCount > 0} />
+                    <ResultsTable outputs={a.outputs ?? {}} units={a.units} names={names} warned={warnCount > 0} bands={a.uncertainty?.outputs} />
                   </section>
+                  <UncertaintyBudget uncertainty={a.uncertainty} names={names} />
                   <section className="space-y-2"><h2 className="font-semibold">Steps</h2><StepChain steps={a.steps ?? []} notices={notices} /></section>
                 </div>
               </div>

@@ -72,13 +72,16 @@ export function StepChain({ steps, notices = [] }: { steps: StepRecordView[]; no
 }
 
 /** The results of a run with their units; rows with a warning anywhere in the chain are marked. */
-export function ResultsTable({ outputs, units, names, warned }: { outputs: Record<string, number>; units: Record<string, string>; names: Record<string, string>; warned: boolean }) {
+export function ResultsTable({ outputs, units, names, warned, bands }: { outputs: Record<string, number>; units: Record<string, string>; names: Record<string, string>; warned: boolean; bands?: Record<string, { rel: number | null; complete: boolean }> }) {
   return (
     <table className={`table-plain ${warned ? 'outline outline-2 outline-caution-line' : ''}`} aria-label="Results">
-      <thead><tr><th scope="col">result</th><th scope="col">symbol</th><th scope="col">value</th><th scope="col">unit</th></tr></thead>
+      <thead><tr><th scope="col">result</th><th scope="col">symbol</th><th scope="col">value</th><th scope="col">unit</th>{bands && <th scope="col" title="propagated from the stated accuracy of every step">band</th>}</tr></thead>
       <tbody>
         {Object.entries(outputs).map(([k, v]) => (
-          <tr key={k}><td className="text-ink-soft">{names[k] ?? ''}</td><td><Sym s={k} /></td><td className="font-mono text-base" data-testid={`result-${k}`}>{formatNumber(v, 6)}</td><td><UnitText unit={units[k] ?? '1'} /></td></tr>
+          <tr key={k}>
+            <td className="text-ink-soft">{names[k] ?? ''}</td><td><Sym s={k} /></td><td className="font-mono text-base" data-testid={`result-${k}`}>{formatNumber(v, 6)}</td><td><UnitText unit={units[k] ?? '1'} /></td>
+            {bands && <td className="font-mono text-xs" data-testid={`result-band-${k}`}>{bands[k]?.rel == null ? '—' : `± ${Number((bands[k].rel! * 100).toPrecision(2))} %${bands[k].complete ? '' : ' (incomplete)'}`}</td>}
+          </tr>
         ))}
       </tbody>
     </table>

@@ -11,6 +11,7 @@ import { TabList } from '@/components/ui/tab-list';
 import type { TemplateDefinition } from '@/lib/engine/template-types';
 import { InputForm, initialInputs, readForm, type InputState } from './input-form';
 import { chainNotices, ResultsTable, StepChain } from './step-chain';
+import { UncertaintyBudget } from './uncertainty-budget';
 import { SavePanel } from './save-panel';
 import { ParametricRun } from './parametric';
 import { ChainOutline } from './chain-outline';
@@ -100,8 +101,9 @@ function Workspace({ detail }: { detail: Detail }) {
                       ? <span role="status" className="rounded bg-caution-bg px-2 py-0.5 text-sm font-medium text-caution">⚠ {warnCount} range warning{warnCount === 1 ? '' : 's'}: see the marked steps</span>
                       : <span className="rounded bg-ok-bg px-2 py-0.5 text-sm text-ok">every step inside its validity range</span>}
                   </div>
-                  <ResultsTable outputs={run.data.outputs ?? {}} units={run.data.units} names={names} warned={warnCount > 0} />
+                  <ResultsTable outputs={run.data.outputs ?? {}} units={run.data.units} names={names} warned={warnCount > 0} bands={run.data.uncertainty?.outputs} />
                 </section>
+                <UncertaintyBudget uncertainty={run.data.uncertainty} names={names} />
                 <section className="space-y-2">
                   <h2 className="font-semibold">Steps</h2>
                   <StepChain steps={run.data.steps ?? []} notices={notices} />

@@ -11,6 +11,7 @@ import type { VersionDetail } from './types';
 interface Answer {
   version: number; contentHash: string | null;
   outputs: Record<string, number>;
+  bands?: Record<string, { rel: number; basis: string; approximates?: string } | null>;
   warnings: { symbol: string; value: number; min?: number; max?: number; message: string }[];
 }
 
@@ -77,9 +78,22 @@ export function EvaluatePanel({ detail }: { detail: VersionDetail }) {
           {warnings.length > 0 && <p role="status" className="text-sm font-medium text-caution">⚠ Outside the published validity range: an extrapolation, not a validated value.</p>}
           <table className="table-plain">
             <tbody>
-              {d.outputs.map((o) => <tr key={o.symbol}><th className="w-1/3 normal-case">{o.symbol}</th><td className="font-mono text-base" data-testid={`out-${o.symbol}`}>{formatNumber(run.data.outputs[o.symbol], 6)}</td><td className="text-xs text-ink-soft">{isDimensionless(o.unit) ? '' : o.unit}</td></tr>)}
+              {d.outputs.map((o) => {
+                const band = run.data.bands?.[o.symbol];
+                return (
+                  <tr key={o.symbol}>
+                    <th className="w-1/3 normal-case">{o.symbol}</th>
+                    <td className="font-mono text-base" data-testid={`out-${o.symbol}`}>{formatNumber(run.data.outputs[o.symbol], 6)}</td>
+                    <td className="text-xs text-ink-soft">{isDimensionless(o.unit) ? '' : o.unit}</td>
+                    <td className="text-xs text-ink-soft" data-testid={`band-${o.symbol}`} title={band?.basis}>{bandLabel(band)}</td>
+                  </tr>
+                );
+              })}
             </tbody>
           </table>
+          {Object.values(run.data.bands ?? {}).some(Boolean) && (
+            <p className="text-xs text-ink-faint">± is the stated accuracy of this correlation on its data — {Object.values(run.data.bands ?? {}).find(Boolean)!.basis} — not a guarantee for your case.</p>
+          )}
           {other.map((w, k) => <p key={k} role="alert" className="rounded bg-caution-bg px-2 py-1 text-xs text-caution">⚠ {w.message}</p>)}
           <p className="text-xs text-ink-faint">Version {run.data.version}, content hash {run.data.contentHash?.slice(0, 12) ?? 'not frozen'}.</p>
         </div>
@@ -87,4 +101,13 @@ export function EvaluatePanel({ detail }: { detail: VersionDetail }) {
       <Caution />
     </aside>
   );
+}
+
+/** "± 10 %", "exact", "± 1.5 % of …" or "no stated accuracy". */
+export function bandLabel(band: { rel: number; approximates?: string } | null | undefined): string {
+  if (band === undefined) return '';
+  if (band === null) return 'no stated accuracy';
+  if (band.rel === 0) return 'exact (model)';
+  const pct = `± ${Number((band.rel * 100).toPrecision(2))} %`;
+  return band.approximates ? `${pct} of ${band.approximates}` : pct;
 }

@@ -41,8 +41,15 @@ export const warning = z.object({
   symbol: z.string(), value: z.number(), min: z.number().optional(), max: z.number().optional(), message: z.string(),
 });
 
+export const band = z.object({
+  rel: z.number().describe('± relative: the stated accuracy of the correlation on its data (0 for an exact solution of its model)'),
+  basis: z.string().describe('where the figure comes from'),
+  approximates: z.string().optional().describe('set when rel is the deviation from this other correlation'),
+}).describe('accuracy band of an output; not a guarantee: the published accuracy on the data the correlation was fitted to');
+
 export const evaluateAnswer = z.object({
   slug: z.string(), version: z.number().int(), contentHash: z.string().nullable(), status: z.enum(VERSION_STATUSES),
+  bands: z.record(z.string(), band.nullable()).describe('band of each output (null: the version states no accuracy); the same for every row'),
   outputs: z.record(z.string(), z.number()).optional(),
   warnings: z.array(warning).optional(),
   results: z.array(z.object({
@@ -160,6 +167,21 @@ export const runAnswer = z.object({
   units: z.record(z.string(), z.string()).describe('unit of each output'),
   steps: z.array(stepRecord).optional(), outputs: z.record(z.string(), z.number()).optional(),
   warnings: z.array(chainWarning).optional().describe('every warning of every step, with the step key'),
+  uncertainty: z.object({
+    method: z.string(),
+    outputs: z.record(z.string(), z.object({
+      value: z.number(), unit: z.string(),
+      rel: z.number().nullable().describe('± relative band of the result (null: no step with a stated accuracy moves it)'),
+      complete: z.boolean().describe('false when a step that moves the result states no accuracy'),
+      budget: z.array(z.object({
+        step: z.string(), title: z.string(), symbol: z.string(), correlation: pin.nullable(),
+        rel: z.number().nullable(), basis: z.string().nullable(),
+        sensitivity: z.number().describe('∂ln(result)/∂ε of this step output'),
+        contribution: z.number().nullable(), share: z.number().nullable().describe('share of the squared band, 0–1'),
+      })),
+      sensitivities: z.record(z.string(), z.object({ derivative: z.number(), elasticity: z.number(), unit: z.string() })),
+    })),
+  }).optional().describe('single runs: the band of every result, its budget by step, and the sensitivities to the inputs'),
   results: z.array(z.object({
     outputs: z.record(z.string(), z.number()).nullable(), warnings: z.array(chainWarning),
     picked: z.record(z.string(), z.string().nullable()).describe('choice key → option picked'),

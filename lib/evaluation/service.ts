@@ -7,6 +7,7 @@ import { recordUsage } from '@/lib/api/usage';
 import { consumeRateLimit } from '@/lib/api/rate-limit';
 import { loadVerifiedCorrelation, loadVerifiedTemplate, type RunnableChain } from './verified';
 import { INLINE_WORK, runOnPool } from './pool';
+import { bandsOf, propagate } from '@/lib/engine/uncertainty';
 
 export const MAX_ROWS = 10_000;
 /** Field problems listed in one answer: the first ones and a count, never an answer larger than the body. */
@@ -61,7 +62,8 @@ function refusal(err: unknown): never {
 export async function evaluateCorrelation({ actor, tokenId, slug, request }: { actor: AuthUser; tokenId: number | null; slug: string; request: EvaluateRequest }) {
   assertRowCount(request.rows);
   const { version: v, compiled: c, notices } = await loadVerifiedCorrelation({ actor, slug, version: request.version });
-  const head = { slug, version: v.version, contentHash: v.contentHash, status: v.status };
+  // Each output's band: the version's stated accuracy, the same for every row.
+  const head = { slug, version: v.version, contentHash: v.contentHash, status: v.status, bands: bandsOf(c.definition) };
   const count = request.rows?.length ?? 1;
   await consumeRateLimit({ userId: actor.id, tokenId, evaluations: count * c.stepsPerRow });
 
@@ -127,9 +129,13 @@ export async function runChain({ actor, tokenId, runnable, request }: { actor: A
   }
 
   try {
-    const r = chain.runDetailed(chain.readInputs(request.inputs ?? {}, 'inputs'));
+    const values = chain.readInputs(request.inputs ?? {}, 'inputs');
+    const r = chain.runDetailed(values);
     used();
-    return { ...head, steps: r.steps, outputs: r.outputs, warnings: [...notices, ...r.warnings] };
+    // The band of every result and its budget by step: first-order propagation of the stated accuracies.
+    let uncertainty: ReturnType<typeof propagate> | undefined;
+    try { uncertainty = propagate(chain, runnable.resolve, values, r); } catch (err) { console.error('band propagation failed', err); }
+    return { ...head, steps: r.steps, outputs: r.outputs, warnings: [...notices, ...r.warnings], uncertainty };
   } catch (err) {
     refusal(err);
   }

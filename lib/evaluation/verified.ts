@@ -93,6 +93,8 @@ export interface RunnableChain {
   usedVersionIds: number[];
   /** The pinned correlations' stored definitions, for the worker pool (verified above). */
   pinned: (Pin & { definitionText: string })[];
+  /** The compiled, verified correlation of each pin: what band propagation differentiates. */
+  resolve: (pin: Pin) => CompiledDefinition;
 }
 
 async function prepare(definition: TemplateDefinition, cacheKey: string | null, what: string, forNewWork: boolean) {
@@ -119,6 +121,7 @@ async function prepare(definition: TemplateDefinition, cacheKey: string | null, 
   return {
     chain, notices, pinnedIds: pins.map((p) => versions.get(`${p.slug}@${p.version}`)!.id),
     pinned: pins.map((p) => ({ ...p, definitionText: versions.get(`${p.slug}@${p.version}`)!.definitionText })),
+    resolve: (pin: Pin) => { const c = resolve(pin); if ('problem' in c) throw new Error(c.problem); return c; },
   };
 }
 
@@ -126,9 +129,9 @@ export async function loadVerifiedTemplate({ actor, slug, version }: { actor: Au
   const v = await loadServableVersion({ actor, slug, version, kind: 'template' as EntryKind });
   await verifyFrozen(v, slug);
   const definition = JSON.parse(v.definitionText) as TemplateDefinition;
-  const { chain, notices, pinnedIds, pinned } = await prepare(definition, v.contentHash, `Version ${v.version} of the template "${slug}"`, false);
+  const { chain, notices, pinnedIds, pinned, resolve } = await prepare(definition, v.contentHash, `Version ${v.version} of the template "${slug}"`, false);
   return {
-    pinned,
+    pinned, resolve,
     template: { id: v.id, slug, version: v.version, contentHash: v.contentHash, status: v.status, title: v.title },
     chain, notices: [...versionNotices(v, 'Template version').map((w) => ({ ...w, step: 'template' })), ...notices],
     usedVersionIds: [v.id, ...pinnedIds],
@@ -144,8 +147,8 @@ export async function loadOwnChain(definition: unknown): Promise<RunnableChain> 
   if (issues.length) {
     throw new AppError('invalid:chain', `The chain is not valid: ${issues.slice(0, 3).map((i) => `${i.pointer}: ${i.message}`).join('; ')}`, { issues: issues.slice(0, 50).map((i) => ({ path: `chain${i.pointer}`, message: i.message })) });
   }
-  const { chain, notices, pinnedIds, pinned } = await prepare(definition as TemplateDefinition, null, 'The chain', true);
-  return { template: null, chain, notices, usedVersionIds: pinnedIds, pinned };
+  const { chain, notices, pinnedIds, pinned, resolve } = await prepare(definition as TemplateDefinition, null, 'The chain', true);
+  return { template: null, chain, notices, usedVersionIds: pinnedIds, pinned, resolve };
 }
 
 /** Keys of the steps that use a pin. */
