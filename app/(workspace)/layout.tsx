@@ -9,6 +9,7 @@ export const dynamic = 'force-dynamic';
 const NAV: NavItem[] = [
   { href: '/library', label: 'Library' },
   { href: '/compare', label: 'Compare' },
+  { href: '/advisor', label: 'Which applies?' },
   { href: '/projects', label: 'Calculations' },
   { href: '/templates', label: 'Templates' },
   { href: '/author', label: 'My drafts', roles: ['author'] },

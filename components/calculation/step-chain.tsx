@@ -47,6 +47,12 @@ export function StepChain({ steps, notices = [] }: { steps: StepRecordView[]; no
             {s.choice && (
               <p className="rounded border border-line bg-paper-sunk px-2 py-1 text-xs">
                 <strong>{s.choice.title}:</strong> {s.choice.rule} <span className="whitespace-nowrap">→ <strong data-testid={`picked-${s.choice.key}`}>{s.choice.picked}</strong> (of {s.choice.options.join(', ')})</span>
+                {s.correlation && (
+                  <Link className="ml-2 whitespace-nowrap text-brand-dark underline" data-testid={`alternatives-${s.key}`}
+                    href={`/advisor?${new URLSearchParams({ like: s.correlation.slug, ...Object.fromEntries(Object.entries(s.inputs).map(([k, v]) => [k, String(Number(v.toPrecision(6)))])) })}`}>
+                    what the other correlations say here
+                  </Link>
+                )}
               </p>
             )}
             <div className="grid gap-3 sm:grid-cols-2">

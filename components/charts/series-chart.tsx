@@ -6,6 +6,12 @@ import { formatNumber } from '@/lib/client/units';
 export interface ChartSeries {
   label: string;
   points: { x: number; y: number | null }[];
+  /** Drawn dashed (e.g. outside a validity range). */
+  dashed?: boolean;
+  /** Index into the palette, to give two series one colour. */
+  color?: number;
+  /** Left out of the legend (the dashed twin of a solid series). */
+  hideInLegend?: boolean;
 }
 
 /** Powers of ten covering [lo, hi] (with 2 and 5 in between when the span is short), for log axes. */
@@ -58,7 +64,7 @@ export function SeriesChart({ series, points, limits = [], bands = [], xLabel, y
           <Legend verticalAlign="top" height={28} />
           {bands.map((b, k) => <ReferenceArea key={`band-${k}`} x1={b.from} x2={b.to} fill={COLORS[(b.color ?? k) % COLORS.length]} fillOpacity={0.08} label={{ value: b.label, position: 'insideTop', fontSize: 10, fill: '#4a5866' }} />)}
           {limits.map((l, k) => <ReferenceLine key={`lim-${k}`} x={l.x} stroke="#9a5b00" strokeDasharray="5 3" label={{ value: l.label, position: 'insideTopRight', fontSize: 11, fill: '#9a5b00' }} />)}
-          {series.map((s, k) => <Line key={s.label} data={s.points} dataKey="y" name={s.label} stroke={COLORS[k % COLORS.length]} dot={false} strokeWidth={2} isAnimationActive={false} connectNulls={false} />)}
+          {series.map((s, k) => <Line key={s.label} data={s.points} dataKey="y" name={s.label} stroke={COLORS[(s.color ?? k) % COLORS.length]} strokeDasharray={s.dashed ? '6 4' : undefined} legendType={s.hideInLegend ? 'none' : 'line'} dot={false} strokeWidth={s.dashed ? 1.5 : 2} isAnimationActive={false} connectNulls={false} />)}
           {points && points.length > 0 && <Scatter data={points} dataKey="y" name="check cases" fill="#b0562f" shape="diamond" isAnimationActive={false} />}
         </ComposedChart>
       </ResponsiveContainer>

@@ -212,3 +212,36 @@ export const saveCalculationBody = z.object({
 
 export const calculationsQuery = z.object({ project: z.coerce.number().int().positive('must be a project id') }).strict();
 export const calculationQuery = z.object({ revision: z.coerce.number().int().positive().optional() }).strict();
+
+// The applicability advisor.
+/** How the advisor ranks its candidates (lib/evaluation/advisor.ts). */
+export const RANKING_RULE = 'inside every validity range first, then evidence grade (well-founded, adequate, thin), then the narrower stated band, then title';
+const finite = z.number().refine(Number.isFinite, 'must be a finite number');
+export const adviceBody = z.object({
+  situation: z.string().trim().min(1).max(120).optional().describe('as in the library, e.g. "circular tube" (GET /api/advice lists them)'),
+  like: slugParam.optional().describe('or: a correlation whose situation to use'),
+  inputs: z.record(z.string().max(32), finite).refine((o) => Object.keys(o).length <= 30, 'at most 30 inputs').describe('dimensionless (or declared-unit) inputs by symbol, e.g. { "Re_D": 30000, "Pr": 3 }'),
+  output: z.string().max(32).optional().describe('the output to compare; default: the one most of them give'),
+  sweep: z.object({
+    symbol: z.string().max(32), from: finite, to: finite, points: z.number().int().min(2).max(200).optional(), log: z.boolean().optional(),
+  }).strict().refine((s) => s.to > s.from, { message: '"to" must be above "from"', path: ['to'] }).optional().describe('a sweep of one input for a plot (other inputs held)'),
+}).strict().refine((b) => b.situation !== undefined || b.like !== undefined, { message: 'give "situation" or "like"', path: ['situation'] });
+
+const adviceBreak = z.object({ symbol: z.string(), value: z.number(), min: z.number().optional(), max: z.number().optional(), factor: z.number().describe('value over the bound it breaks'), message: z.string() });
+const spread = z.object({ min: z.number(), max: z.number(), median: z.number(), rel: z.number().describe('(max − min)/median'), count: z.number().int() }).nullable();
+export const adviceAnswer = z.object({
+  situation: z.string(), output: z.string(), inputs: z.record(z.string(), z.number()), ranking: z.string().describe('the rule the list is ranked by'),
+  spread: z.object({ inside: spread.describe('among the correlations whose ranges hold the point'), all: spread.describe('among every one evaluated') }),
+  sweep: z.object({ symbol: z.string(), x: z.array(z.number()) }).nullable(),
+  candidates: z.array(z.object({
+    rank: z.number().int(), slug: z.string(), title: z.string(), version: z.number().int(), contentHash: z.string().nullable(),
+    grade: z.enum(GRADES).nullable(), band: band.nullable(), inputs: z.array(z.string()),
+    status: z.enum(['inside', 'outside', 'refused', 'needs-inputs', 'other-output']).describe('inside every validity range, outside one or more (value extrapolated), refused by a hard limit, missing inputs, or gives other outputs'),
+    note: z.string().optional(), missing: z.array(z.string()).optional(),
+    value: z.number().nullable(), breaks: z.array(adviceBreak),
+    series: z.array(z.object({ x: z.number(), y: z.number().nullable(), inside: z.boolean() })).nullable(),
+  })),
+});
+export const situationsAnswer = z.object({
+  situations: z.array(z.object({ category: z.string(), situation: z.string(), correlations: z.number().int(), inputs: z.array(z.string()), outputs: z.array(z.string()) })),
+});

@@ -1,6 +1,6 @@
 import { z, type ZodType } from 'zod';
 import {
-  correlationAnswer, correlationPath, evaluateAnswer, evaluateBody, errorAnswer, listAnswer, listQuery, versionAnswer, versionPath,
+  adviceAnswer, adviceBody, situationsAnswer, RANKING_RULE, correlationAnswer, correlationPath, evaluateAnswer, evaluateBody, errorAnswer, listAnswer, listQuery, versionAnswer, versionPath,
   createCorrelationBody, updateDraftBody, decisionBody, withdrawBody, compareBody,
   templatesQuery, templateListAnswer, runBody, runAnswer, idParam, createProjectBody, memberBody, saveCalculationBody,
   calculationsQuery, calculationQuery,
@@ -81,6 +81,14 @@ export function openApiDocument(serverUrl: string) {
       '/api/compare': { post: { operationId: 'compare', summary: 'Evaluate several correlations over a range of one input', requestBody: { required: true, ...json(compareBody, 'input') }, responses: { 200: { description: 'Series and largest differences' }, ...errors(401, 403, 404, 422) } } },
       '/api/templates': {
         get: { operationId: 'listTemplates', summary: 'Calculation templates with their latest approved version', parameters: params(templatesQuery, 'query'), responses: { 200: { description: 'Templates', ...json(templateListAnswer) }, ...errors(401, 403, 422) } },
+      },
+      '/api/advice': {
+        get: { operationId: 'listSituations', summary: 'Situations with approved correlations, with the inputs they take and the outputs they give', responses: { 200: { description: 'Situations', ...json(situationsAnswer) }, ...errors(401, 403) } },
+        post: {
+          operationId: 'advise', summary: 'Every approved correlation for a situation at one point: validity, value, band, evidence grade, spread, ranked; optionally a sweep of one input',
+          requestBody: { required: true, ...json(adviceBody, 'input') },
+          responses: { 200: { description: `Ranked candidates; ranking rule: ${RANKING_RULE}`, ...json(adviceAnswer) }, ...errors(400, 401, 403, 404, 422, 429, 503) },
+        },
       },
       '/api/templates/{slug}/run': {
         post: {

@@ -28,9 +28,11 @@ export const ACCESS = {
   'GET /api/correlations/{slug}/versions/{n}/deviation': { scope: 'read' },
   'GET /api/templates': { scope: 'read' },
   'POST /api/compare': { scope: 'read' },
+  'GET /api/advice': { scope: 'read' },
   // Evaluating and running: "evaluate" (counted by the rate limit).
   'POST /api/correlations/{slug}/evaluate': { scope: 'evaluate' },
   'POST /api/templates/{slug}/run': { scope: 'evaluate' },
+  'POST /api/advice': { scope: 'evaluate' },
   'POST /api/calculations/{id}/rerun': { scope: 'evaluate' },
   // Authoring: authors; tokens with "write".
   'POST /api/correlations': { roles: ['author'], scope: 'write' },
