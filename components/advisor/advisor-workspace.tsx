@@ -85,7 +85,7 @@ export function AdvisorWorkspace() {
   const point = a && a.sweep ? a.inputs[a.sweep.symbol] : undefined;
 
   return (
-    <div className="grid gap-4 lg:grid-cols-[20rem,1fr]">
+    <div className="grid gap-4 lg:grid-cols-[20rem_1fr]">
       <aside className="panel h-fit space-y-3">
         <form onSubmit={submit} noValidate className="space-y-2" aria-label="Situation and point">
           <label className="block text-sm font-medium">Situation

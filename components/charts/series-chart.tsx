@@ -51,6 +51,9 @@ export function SeriesChart({ series, points, limits = [], bands = [], xLabel, y
   const xs = series.flatMap((s) => s.points.map((p) => p.x)).concat((points ?? []).map((p) => p.x)).filter((x) => x > 0);
   const xTicks = logX && xs.length ? decades(Math.min(...xs), Math.max(...xs)) : undefined;
   const yTicks = logY ? decades(yMin, yMax) : undefined;
+  // Room for the legend: about three entries per line.
+  const shown = series.filter((x) => !x.hideInLegend).length + (points?.length ? 1 : 0);
+  const legendHeight = 10 + 20 * Math.max(1, Math.ceil(shown / 3));
   return (
     <div style={{ width: '100%', height }}>
       <ResponsiveContainer>
@@ -61,7 +64,7 @@ export function SeriesChart({ series, points, limits = [], bands = [], xLabel, y
           <YAxis type="number" scale={logY ? 'log' : 'linear'} domain={['auto', 'auto']} ticks={yTicks} tickFormatter={(v) => formatNumber(v, 3)} width={70}
             label={{ value: yLabel, angle: -90, position: 'insideLeft', fill: '#4a5866', fontSize: 12 }} />
           <Tooltip formatter={(v) => formatNumber(Number(v), 5)} labelFormatter={(v) => `${xLabel} = ${formatNumber(Number(v), 5)}`} />
-          <Legend verticalAlign="top" height={28} />
+          <Legend verticalAlign="top" height={legendHeight} wrapperStyle={{ fontSize: 12, lineHeight: '18px' }} />
           {bands.map((b, k) => <ReferenceArea key={`band-${k}`} x1={b.from} x2={b.to} fill={COLORS[(b.color ?? k) % COLORS.length]} fillOpacity={0.08} label={{ value: b.label, position: 'insideTop', fontSize: 10, fill: '#4a5866' }} />)}
           {limits.map((l, k) => <ReferenceLine key={`lim-${k}`} x={l.x} stroke="#9a5b00" strokeDasharray="5 3" label={{ value: l.label, position: 'insideTopRight', fontSize: 11, fill: '#9a5b00' }} />)}
           {series.map((s, k) => <Line key={s.label} data={s.points} dataKey="y" name={s.label} stroke={COLORS[(s.color ?? k) % COLORS.length]} strokeDasharray={s.dashed ? '6 4' : undefined} legendType={s.hideInLegend ? 'none' : 'line'} dot={false} strokeWidth={s.dashed ? 1.5 : 2} isAnimationActive={false} connectNulls={false} />)}

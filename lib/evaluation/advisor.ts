@@ -85,10 +85,11 @@ export async function advise({ actor, tokenId, request }: { actor: AuthUser; tok
   await consumeRateLimit({ userId: actor.id, tokenId, evaluations: rows.length * (1 + points) });
 
   const loaded = await Promise.all(rows.map(async (r) => ({ row: r, v: await loadVerifiedCorrelation({ actor, slug: r.slug }) })));
-  // The compared output: the one asked for, else the one most of them give.
   const counts = new Map<string, number>();
   for (const { v } of loaded) for (const s of v.compiled.outputSymbols) counts.set(s, (counts.get(s) ?? 0) + 1);
-  const output = request.output ?? [...counts].sort((a, b) => b[1] - a[1])[0][0];
+  // The compared output: the one asked for, else the first output of the correlation it is "like", else the most common.
+  const likeOutput = request.like ? loaded.find((l) => l.row.slug === request.like)?.v.compiled.outputSymbols[0] : undefined;
+  const output = request.output ?? likeOutput ?? [...counts].sort((a, b) => b[1] - a[1])[0][0];
   if (!counts.has(output)) throw new AppError('invalid:advice', `No correlation for "${situation}" gives ${output}; they give ${[...counts.keys()].join(', ')}.`, { issues: [{ path: 'output', message: `not an output here` }] });
 
   const xs = sweep ? Array.from({ length: points }, (_, k) => {
