@@ -7,7 +7,7 @@
  * ("validation/reference/formulas.ts#<key>"); validation/library.test.ts recomputes it.
  */
 import { mixingLengthPipe, turbulentLayer, turbulentLayerNusselt } from './turbulence';
-import { blasius, graetzMeanNusselt, graetzNusseltUWT, levequeUniformFluxCoefficient, ostrachG, pohlhausenNusseltCoefficient, powerLawWallNusseltCoefficient, thermalThicknessEta } from './similarity';
+import { blasius, graetzMeanNusselt, graetzNusseltUWT, levequeUniformFluxCoefficient, ostrachG, simpsonSamples, pohlhausenNusseltCoefficient, powerLawWallNusseltCoefficient, thermalThicknessEta } from './similarity';
 
 type Inputs = Record<string, number>;
 type Values = Record<string, number>;
@@ -178,7 +178,7 @@ function poiseuilleFd(cells = 400) {
     for (let i = n - 2; i >= 0; i--) phi[i] = (d[i] - c[i] * phi[i + 1]) / b[i];
     return phi;
   };
-  const area = (g: (i: number) => number) => 2 * simpsonOn(cells, h, (i) => g(i) * r[i]);
+  const area = (g: (i: number) => number) => 2 * simpsonSamples(cells, h, (i) => g(i) * r[i]);
   const trapezoid = (g: (i: number) => number) => { let s = 0; for (let i = 1; i <= cells; i++) s += (h / 2) * (g(i) * r[i] + g(i - 1) * r[i - 1]); return 2 * s; };
   const u = solve(r.map(() => 1));
   const um = trapezoid((i) => u[i]);
@@ -186,11 +186,6 @@ function poiseuilleFd(cells = 400) {
   const theta = solve(u.map((v) => (-2 * v) / um));
   const thetaM = area((i) => u[i] * theta[i]) / area((i) => u[i]);
   return { fRe: 8 / um, nuUhf: (2 * 1) / -thetaM };
-}
-function simpsonOn(cells: number, h: number, g: (i: number) => number): number {
-  let s = g(0) + g(cells);
-  for (let i = 1; i < cells; i++) s += (i % 2 ? 4 : 2) * g(i);
-  return (s * h) / 3;
 }
 let poiseuille: ReturnType<typeof poiseuilleFd> | undefined;
 const lam = () => (poiseuille ??= poiseuilleFd());

@@ -220,6 +220,33 @@ export function powerLawWallNusseltCoefficient(pr: number, n: number): number {
  * orthogonality with the weight r (1 − r²) (Simpson's rule). Mean Nusselt number over 0…x from the
  * energy balance: Nu_m = −ln θ_m(ζ)/ζ. Truncation error below 1e-6 for ζ ≥ 0.004.
  */
+/**
+ * Classical fourth-order Runge–Kutta for y″ = acc(x, y, y′) from x0 in `steps` steps of h; `each` sees y
+ * after every step. Returns y and y′ at the end.
+ */
+function rk4Second(acc: (x: number, y: number, yp: number) => number, x0: number, y0: number, yp0: number, h: number, steps: number, each?: (y: number) => void) {
+  let y = y0;
+  let yp = yp0;
+  for (let i = 0; i < steps; i++) {
+    const x = x0 + i * h;
+    const k1 = [yp, acc(x, y, yp)];
+    const k2 = [yp + (h / 2) * k1[1], acc(x + h / 2, y + (h / 2) * k1[0], yp + (h / 2) * k1[1])];
+    const k3 = [yp + (h / 2) * k2[1], acc(x + h / 2, y + (h / 2) * k2[0], yp + (h / 2) * k2[1])];
+    const k4 = [yp + h * k3[1], acc(x + h, y + h * k3[0], yp + h * k3[1])];
+    y += (h / 6) * (k1[0] + 2 * k2[0] + 2 * k3[0] + k4[0]);
+    yp += (h / 6) * (k1[1] + 2 * k2[1] + 2 * k3[1] + k4[1]);
+    each?.(y);
+  }
+  return { y, yp };
+}
+
+/** Composite Simpson's rule over samples g(0) … g(cells) spaced h apart (cells even). */
+export function simpsonSamples(cells: number, h: number, g: (i: number) => number): number {
+  let s = g(0) + g(cells);
+  for (let i = 1; i < cells; i++) s += (i % 2 ? 4 : 2) * g(i);
+  return (s * h) / 3;
+}
+
 const GRAETZ_STEPS = 4000;
 let graetzCache: { lambda: number; weight: number }[] | undefined;
 
@@ -229,26 +256,11 @@ function graetzPairs() {
   const shoot = (lambda: number, keep = false) => {
     const l2 = lambda * lambda;
     const acc = (r: number, p: number, dp: number) => (r === 0 ? -l2 * p / 2 : -dp / r - l2 * (1 - r * r) * p);
-    let phi = 1;
-    let dphi = 0;
     const values = keep ? [1] : [];
-    for (let i = 0; i < GRAETZ_STEPS; i++) {
-      const r = i * h;
-      const k1 = [dphi, acc(r, phi, dphi)];
-      const k2 = [dphi + (h / 2) * k1[1], acc(r + h / 2, phi + (h / 2) * k1[0], dphi + (h / 2) * k1[1])];
-      const k3 = [dphi + (h / 2) * k2[1], acc(r + h / 2, phi + (h / 2) * k2[0], dphi + (h / 2) * k2[1])];
-      const k4 = [dphi + h * k3[1], acc(r + h, phi + h * k3[0], dphi + h * k3[1])];
-      phi += (h / 6) * (k1[0] + 2 * k2[0] + 2 * k3[0] + k4[0]);
-      dphi += (h / 6) * (k1[1] + 2 * k2[1] + 2 * k3[1] + k4[1]);
-      if (keep) values.push(phi);
-    }
-    return { wall: phi, values };
+    const { y } = rk4Second(acc, 0, 1, 0, h, GRAETZ_STEPS, keep ? (phi) => values.push(phi) : undefined);
+    return { wall: y, values };
   };
-  const simpsonGrid = (g: (i: number) => number) => {
-    let s = g(0) + g(GRAETZ_STEPS);
-    for (let i = 1; i < GRAETZ_STEPS; i++) s += (i % 2 ? 4 : 2) * g(i);
-    return (s * h) / 3;
-  };
+  const simpsonGrid = (g: (i: number) => number) => simpsonSamples(GRAETZ_STEPS, h, g);
   const pairs: { lambda: number; weight: number }[] = [];
   let a = 0.5;
   let fa = shoot(a).wall;
@@ -299,22 +311,7 @@ export function graetzMeanNusselt(lOverDOverRePr: number): number {
 let uniformFluxLeveque: number | undefined;
 export function levequeUniformFluxCoefficient(): number {
   if (uniformFluxLeveque !== undefined) return uniformFluxLeveque;
-  const run = (t0: number) => {
-    const h = 1e-3;
-    let t = t0;
-    let tp = -1;
-    const acc = (z: number, a: number, b: number) => 0.5 * z * a - 0.25 * z * z * b;
-    for (let i = 0; i < 8000; i++) {
-      const z = i * h;
-      const k1 = [tp, acc(z, t, tp)];
-      const k2 = [tp + (h / 2) * k1[1], acc(z + h / 2, t + (h / 2) * k1[0], tp + (h / 2) * k1[1])];
-      const k3 = [tp + (h / 2) * k2[1], acc(z + h / 2, t + (h / 2) * k2[0], tp + (h / 2) * k2[1])];
-      const k4 = [tp + h * k3[1], acc(z + h, t + h * k3[0], tp + h * k3[1])];
-      t += (h / 6) * (k1[0] + 2 * k2[0] + 2 * k3[0] + k4[0]);
-      tp += (h / 6) * (k1[1] + 2 * k2[1] + 2 * k3[1] + k4[1]);
-    }
-    return tp;
-  };
+  const run = (t0: number) => rk4Second((z, a, b) => 0.5 * z * a - 0.25 * z * z * b, 0, t0, -1, 1e-3, 8000).yp;
   const a = run(0);
   const b = run(1);
   const theta0 = -a / (b - a);
