@@ -7,6 +7,7 @@ import { useEffect, useMemo, useState } from 'react';
 import type { z } from 'zod';
 import { api, ApiError } from '@/lib/client/api';
 import { formatNumber } from '@/lib/client/units';
+import { bandText, percent as pct } from '@/lib/client/bands';
 import type { adviceAnswer, situationsAnswer } from '@/lib/api/contract';
 import { SeriesChart, type ChartSeries } from '@/components/charts/series-chart';
 import { Caution } from '@/components/ui/caution';
@@ -23,7 +24,6 @@ const STATUS: Record<Advice['candidates'][number]['status'], { text: string; cls
   'other-output': { text: 'other outputs', cls: 'bg-paper-sunk text-ink-soft' },
 };
 const GRADE_CLS: Record<string, string> = { 'well-founded': 'text-ok', adequate: 'text-brand-dark', thin: 'text-caution' };
-const pct = (x: number) => `${Number((x * 100).toPrecision(2))} %`;
 
 function breakText(b: Advice['candidates'][number]['breaks'][number]) {
   const below = b.min !== undefined && b.value < b.min;
@@ -137,7 +137,7 @@ export function AdvisorWorkspace() {
                         {c.note && c.status !== 'refused' && <span className="block text-xs">{c.note}</span>}
                       </td>
                       <td className="font-mono" data-testid={`advice-value-${c.slug}`}>{c.value === null ? '—' : formatNumber(c.value, 5)}</td>
-                      <td className="font-mono text-xs" title={c.band?.basis}>{c.band ? (c.band.rel === 0 ? 'exact' : `± ${pct(c.band.rel)}`) : 'none stated'}</td>
+                      <td className="font-mono text-xs" title={c.band?.basis}>{bandText(c.band)}</td>
                       <td className={`text-xs ${GRADE_CLS[c.grade ?? ''] ?? ''}`}>{c.grade ?? '—'}</td>
                     </tr>
                   ))}

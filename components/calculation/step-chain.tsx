@@ -2,6 +2,7 @@
 
 import Link from 'next/link';
 import { formatNumber } from '@/lib/client/units';
+import { bandText } from '@/lib/client/bands';
 import { Sym, UnitText } from './symbol';
 import type { ChainWarningView, StepRecordView } from './types';
 
@@ -86,7 +87,7 @@ export function ResultsTable({ outputs, units, names, warned, bands }: { outputs
         {Object.entries(outputs).map(([k, v]) => (
           <tr key={k}>
             <td className="text-ink-soft">{names[k] ?? ''}</td><td><Sym s={k} /></td><td className="font-mono text-base" data-testid={`result-${k}`}>{formatNumber(v, 6)}</td><td><UnitText unit={units[k] ?? '1'} /></td>
-            {bands && <td className="font-mono text-xs" data-testid={`result-band-${k}`}>{bands[k]?.rel == null ? '—' : `± ${Number((bands[k].rel! * 100).toPrecision(2))} %${bands[k].complete ? '' : ' (incomplete)'}`}</td>}
+            {bands && <td className="font-mono text-xs" data-testid={`result-band-${k}`}>{bands[k]?.rel == null ? '—' : `${bandText(bands[k])}${bands[k].complete ? '' : ' (incomplete)'}`}</td>}
           </tr>
         ))}
       </tbody>

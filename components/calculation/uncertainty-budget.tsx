@@ -2,12 +2,11 @@
 
 import { useState } from 'react';
 import { formatNumber } from '@/lib/client/units';
+import { bandText, percent as pct } from '@/lib/client/bands';
 import { Sym, UnitText } from './symbol';
 import type { RunAnswer } from './types';
 
 type Uncertainty = NonNullable<RunAnswer['uncertainty']>;
-
-const pct = (x: number) => `${Number((x * 100).toPrecision(2))} %`;
 
 /**
  * How sure each result is: its band from the stated accuracies of the steps, which step contributes how
@@ -42,7 +41,7 @@ export function UncertaintyBudget({ uncertainty, names }: { uncertainty: Uncerta
             <tr key={`${l.step}-${l.symbol}`} data-testid={`budget-${l.step}-${l.symbol}`}>
               <td>{l.title}{l.correlation && <span className="block font-mono text-xs text-ink-faint">{l.correlation.slug} v{l.correlation.version}</span>}</td>
               <td><Sym s={l.symbol} /></td>
-              <td className="font-mono text-xs" title={l.basis ?? undefined}>{l.rel === null ? 'none stated' : l.rel === 0 ? 'exact' : `± ${pct(l.rel)}`}</td>
+              <td className="font-mono text-xs" title={l.basis ?? undefined}>{bandText(l)}</td>
               <td className="font-mono text-xs">{formatNumber(l.sensitivity, 3)}</td>
               <td className="font-mono text-xs">{l.contribution === null ? '—' : `± ${pct(l.contribution)}`}</td>
               <td>{l.share !== null && (

@@ -6,6 +6,7 @@ import { api, ApiError } from '@/lib/client/api';
 import { formatNumber, isDimensionless, unitChoices } from '@/lib/client/units';
 import { defaultInputs } from './default-inputs';
 import { Caution } from '@/components/ui/caution';
+import { bandText } from '@/lib/client/bands';
 import type { VersionDetail } from './types';
 
 interface Answer {
@@ -85,7 +86,7 @@ export function EvaluatePanel({ detail }: { detail: VersionDetail }) {
                     <th className="w-1/3 normal-case">{o.symbol}</th>
                     <td className="font-mono text-base" data-testid={`out-${o.symbol}`}>{formatNumber(run.data.outputs[o.symbol], 6)}</td>
                     <td className="text-xs text-ink-soft">{isDimensionless(o.unit) ? '' : o.unit}</td>
-                    <td className="text-xs text-ink-soft" data-testid={`band-${o.symbol}`} title={band?.basis}>{bandLabel(band)}</td>
+                    <td className="text-xs text-ink-soft" data-testid={`band-${o.symbol}`} title={band?.basis}>{bandText(band)}</td>
                   </tr>
                 );
               })}
@@ -103,11 +104,3 @@ export function EvaluatePanel({ detail }: { detail: VersionDetail }) {
   );
 }
 
-/** "± 10 %", "exact", "± 1.5 % of …" or "no stated accuracy". */
-export function bandLabel(band: { rel: number; approximates?: string } | null | undefined): string {
-  if (band === undefined) return '';
-  if (band === null) return 'no stated accuracy';
-  if (band.rel === 0) return 'exact (model)';
-  const pct = `± ${Number((band.rel * 100).toPrecision(2))} %`;
-  return band.approximates ? `${pct} of ${band.approximates}` : pct;
-}

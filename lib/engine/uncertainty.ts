@@ -4,7 +4,8 @@ import { constant, definitionDual, evaluateDual, variable, type Dual } from './s
 import type { CompiledDefinition } from './compile';
 import type { CompiledChain } from './chain';
 import type { Accuracy, Definition } from './types';
-import type { ChainResult, ChainStep, CorrelationStep, ExpressionStep, LeafStep, Pin } from './template-types';
+import type { MathNode } from 'mathjs';
+import type { ChainResult, CorrelationStep, ExpressionStep, LeafStep, Pin } from './template-types';
 
 /**
  * Accuracy bands: what a correlation's stated accuracy says about each of its results, and how the
@@ -69,14 +70,29 @@ export interface Propagation {
 
 export const PROPAGATION_METHOD = 'first-order propagation of the stated accuracies (independent relative errors on every correlation step output, combined as √Σ(∂ln y/∂ε · rel)²), derivatives by forward-mode automatic differentiation of the expression trees';
 
-/** Every leaf step of a template by key, including those inside choices. */
-function leavesByKey(steps: ChainStep[]): Map<string, LeafStep> {
-  const m = new Map<string, LeafStep>();
-  for (const s of steps) {
-    if (s.kind === 'choice') for (const o of s.options) for (const l of o.steps) m.set(l.key, l);
-    else m.set(s.key, s);
+interface ChainShape {
+  /** Every leaf step by key, including those inside choices. */
+  leaves: Map<string, LeafStep>;
+  /** The checked tree of every expression-step output, by step key then output symbol. */
+  trees: Map<string, MathNode[]>;
+}
+/** Parsed once per compiled chain (the chain compiler checked these expressions already): runs only evaluate. */
+const shapes = new WeakMap<CompiledChain, ChainShape>();
+
+function shapeOf(chain: CompiledChain): ChainShape {
+  const known = shapes.get(chain);
+  if (known) return known;
+  const leaves = new Map<string, LeafStep>();
+  for (const s of chain.definition.steps) {
+    if (s.kind === 'choice') for (const o of s.options) for (const l of o.steps) leaves.set(l.key, l);
+    else leaves.set(s.key, s);
   }
-  return m;
+  const all = new Set(chain.units.keys());
+  const trees = new Map([...leaves].filter(([, l]) => l.kind === 'expression')
+    .map(([key, l]) => [key, (l as ExpressionStep).outputs.map((o) => checkExpression(o.expression, all).node)]));
+  const shape = { leaves, trees };
+  shapes.set(chain, shape);
+  return shape;
 }
 
 /**
@@ -85,16 +101,18 @@ function leavesByKey(steps: ChainStep[]): Map<string, LeafStep> {
  */
 export function propagate(chain: CompiledChain, resolve: (pin: Pin) => CompiledDefinition, values: ArrayLike<number>, run: ChainResult = chain.runDetailed(values)): Propagation {
   const def = chain.definition;
-  const leaves = leavesByKey(def.steps);
+  const { leaves, trees } = shapeOf(chain);
   const nIn = chain.inputSymbols.length;
   // One variable per chain input, then one per correlation step output (its relative error ε).
-  const sources: { step: string; title: string; symbol: string; definitionSymbol: string; correlation: Pin; band: Band | null }[] = [];
+  const sources: { step: string; title: string; symbol: string; correlation: Pin; band: Band | null }[] = [];
+  const sourceIndex = new Map<string, number>();
   for (const r of run.steps) {
     if (r.kind !== 'correlation') continue;
     const leaf = leaves.get(r.key) as CorrelationStep;
     const c = resolve(leaf.use);
     for (const [defOut, chainSym] of Object.entries(leaf.outputs)) {
-      sources.push({ step: r.key, title: r.title, symbol: chainSym, definitionSymbol: defOut, correlation: leaf.use, band: bandOf(c.definition.accuracy, defOut) });
+      sourceIndex.set(`${r.key}\u0000${chainSym}`, sources.length);
+      sources.push({ step: r.key, title: r.title, symbol: chainSym, correlation: leaf.use, band: bandOf(c.definition.accuracy, defOut) });
     }
   }
   const n = nIn + sources.length;
@@ -118,16 +136,14 @@ export function propagate(chain: CompiledChain, resolve: (pin: Pin) => CompiledD
       const out = definitionDual(c, inputs);
       for (const [defOut, chainSym] of Object.entries(leaf.outputs)) {
         const y = out[defOut];
-        const j = nIn + sources.findIndex((s) => s.step === r.key && s.symbol === chainSym);
+        const j = nIn + sourceIndex.get(`${r.key}\u0000${chainSym}`)!;
         const d = Float64Array.from(y.d);
         d[j] += y.v;
         scope.set(chainSym, { v: y.v, d });
       }
     } else {
-      for (const o of (leaf as ExpressionStep).outputs) {
-        const { node } = checkExpression(o.expression, new Set(scope.keys()));
-        scope.set(o.symbol, evaluateDual(node, scope, n));
-      }
+      const nodes = trees.get(r.key)!;
+      (leaf as ExpressionStep).outputs.forEach((o, k) => scope.set(o.symbol, evaluateDual(nodes[k], scope, n)));
     }
   }
   const outputs: Record<string, PropagatedOutput> = {};
