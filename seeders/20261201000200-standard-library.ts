@@ -13,6 +13,11 @@ export const name = '20261201000200-standard-library';
  * validation fails stops the seed with the report's problems.
  */
 export async function up(): Promise<void> {
+  await seedLibrary();
+}
+
+/** Seeds every library file whose slug the database does not hold yet (drafted, submitted, approved). */
+export async function seedLibrary(): Promise<void> {
   const author = await demoActor('author@demo.example');
   const approver = await demoActor('approver@demo.example');
   const { Correlation } = db();

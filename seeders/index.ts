@@ -4,6 +4,7 @@ import * as demoScenario from './20261201000300-demo-scenario';
 import * as propertyTables from './20261202000050-property-tables-from-standards';
 import * as templates from './20261202000100-calculation-templates';
 import * as demoCalculations from './20261202000200-demo-calculations';
+import * as libraryAdditions from './20261203000100-standard-library-additions';
 
 export interface Seeder {
   name: string;
@@ -12,4 +13,4 @@ export interface Seeder {
 }
 
 /** Seeders in order; tracked in their own table, so each runs once per database. */
-export const seeders: Seeder[] = [demoUsers, standardLibrary, demoScenario, propertyTables, templates, demoCalculations];
+export const seeders: Seeder[] = [demoUsers, standardLibrary, demoScenario, propertyTables, templates, demoCalculations, libraryAdditions];

@@ -7,7 +7,8 @@ import type { ValidationReport } from '@/lib/engine/validate';
 import { execFileSync } from 'node:child_process';
 import { crossCheckTolerance } from '@/lib/engine/evidence';
 import { isRetypedCrossCheck, REFERENCES, referenceKey } from '@/validation/reference/formulas';
-import { isPlanned, partnerInputsOf, plannedCases, PYTHON_EVAL } from '@/validation/reference/evidence-plan';
+import { crossCheckExpected, isPlanned, parseCrossCheckLocator, plannedCases, PYTHON_EVAL } from '@/validation/reference/evidence-plan';
+import { MAPPINGS } from '@/validation/reference/mappings';
 import { db } from '@/models';
 import { closeSequelize } from '@/lib/db/connection';
 
@@ -85,19 +86,20 @@ describe('standard library definition files', () => {
       for (const c of checkCases as CheckCase[]) {
         // A re-typed copy of another correlation with a chosen tolerance is not a cross-check.
         expect(isRetypedCrossCheck(slug, c, slugs), `${slug} "${c.label}": compare with the library correlation itself (correlation:<slug>)`).toBe(false);
-        const m = /^correlation:([a-z0-9-]+)(?:\?(.*))?$/.exec(c.source.locator ?? '');
-        if (!m) continue;
+        const loc = parseCrossCheckLocator(c.source.locator);
+        if (!loc) continue;
         expect(c.source.kind).toBe('cross-check');
-        const partner = library.find((e) => e.slug === m[1]);
-        expect(partner, `${slug} "${c.label}": partner ${m[1]}`).toBeDefined();
+        const partner = library.find((e) => e.slug === loc.partner);
+        expect(partner, `${slug} "${c.label}": partner ${loc.partner}`).toBeDefined();
         const pdef = partner!.definition as unknown as Definition;
         const own = definition as unknown as Definition;
-        const fixed = Object.fromEntries([...new URLSearchParams(m[2] ?? '').entries()].map(([k, v]) => [k, Number(v)]));
         const numeric = Object.fromEntries(Object.entries(c.inputs).map(([k, v]) => [k, typeof v === 'number' ? v : v.value]));
-        const result = compiled(pdef).evaluate(partnerInputsOf(pdef, numeric, fixed));
-        expect(result.warnings, `${slug} "${c.label}": inside the partner's validity ranges`).toEqual([]);
-        for (const [sym, v] of Object.entries(c.expected)) expect(Math.abs(result.outputs[sym] / v - 1), `${slug} "${c.label}" ${sym}`).toBeLessThan(1e-9);
-        expect(c.tolerance.rel, `${slug} "${c.label}": tolerance from the stated accuracies`).toBe(crossCheckTolerance({ slug, accuracy: own.accuracy }, { slug: m[1], accuracy: pdef.accuracy }));
+        const x = crossCheckExpected(own, pdef, numeric, loc.fixed, loc.via);
+        expect(x.warnings, `${slug} "${c.label}": inside the partner's validity ranges`).toEqual([]);
+        for (const [sym, v] of Object.entries(c.expected)) expect(Math.abs(x.expected[sym] / v - 1), `${slug} "${c.label}" ${sym}`).toBeLessThan(1e-9);
+        const base = crossCheckTolerance({ slug, accuracy: own.accuracy }, { slug: loc.partner, accuracy: pdef.accuracy })!;
+        const rel = loc.via && MAPPINGS[loc.via].rel ? Math.ceil(Math.hypot(base, MAPPINGS[loc.via].rel!) * 1000 - 1e-9) / 1000 : base;
+        expect(c.tolerance.rel, `${slug} "${c.label}": tolerance from the stated accuracies`).toBe(rel);
       }
     }
   });

@@ -1,9 +1,8 @@
 'use client';
 
-import type { Definition, ValidityLimit, Reference } from '@/lib/engine/types';
+import { CATEGORIES, CATEGORY_LABELS, type Definition, type ValidityLimit, type Reference } from '@/lib/engine/types';
 import { NumberCell } from '@/components/ui/number-cell';
 
-const CATEGORIES = ['external-flow', 'internal-flow', 'free-convection', 'friction', 'boundary-layer', 'properties'];
 
 /** Form view of the parts of a definition that are tedious in JSON: description, validity, references. */
 export function DefinitionForm({ definition: d, onChange }: { definition: Definition; onChange: (d: Definition) => void }) {
@@ -21,7 +20,7 @@ export function DefinitionForm({ definition: d, onChange }: { definition: Defini
         <label className="block text-sm">Title<input className="field-input" value={d.title ?? ''} onChange={(e) => set({ title: e.target.value })} /></label>
         <label className="block text-sm">Summary<textarea className="field-input" rows={3} value={d.summary ?? ''} onChange={(e) => set({ summary: e.target.value })} /></label>
         <div className="grid grid-cols-2 gap-2">
-          <label className="block text-sm">Category<select className="field-input" value={d.category} onChange={(e) => set({ category: e.target.value as Definition['category'] })}>{CATEGORIES.map((c) => <option key={c}>{c}</option>)}</select></label>
+          <label className="block text-sm">Category<select className="field-input" value={d.category} onChange={(e) => set({ category: e.target.value as Definition['category'] })}>{CATEGORIES.map((c) => <option key={c} value={c}>{CATEGORY_LABELS[c]}</option>)}</select></label>
           <label className="block text-sm">Situation<input className="field-input" value={d.situation ?? ''} onChange={(e) => set({ situation: e.target.value })} /></label>
         </div>
         <label className="block text-sm">Property basis<input className="field-input" value={d.propertyBasis ?? ''} onChange={(e) => set({ propertyBasis: e.target.value })} /></label>

@@ -2,6 +2,7 @@ import type { Unit } from 'mathjs';
 import type { Analysed, DefinitionIssue } from './analyse';
 import { typicalValue } from './ranges';
 import { describeDimension, hasDimensionOf, isDimensionless, parseUnit, quantity } from './units';
+import { FUNCTIONS } from './expressions';
 
 /**
  * Evaluates every step and output with units (mathjs quantities) and reports each expression whose
@@ -13,6 +14,13 @@ export function checkDimensions(a: Analysed): DefinitionIssue[] {
   const bad = new Set<string>();
   for (const inp of a.definition.inputs) scope.set(inp.symbol, quantity(typicalValue(a.definition, inp.symbol), inp.unit));
   for (const c of a.definition.constants ?? []) scope.set(c.symbol, quantity(c.value === 0 ? 1 : c.value, c.unit));
+  // Whitelisted functions mathjs does not know (the Bessel functions) take and give pure numbers.
+  for (const name of ['besselI0', 'besselI1', 'besselK0', 'besselK1']) {
+    scope.set(name, (x: unknown) => {
+      if (typeof x !== 'number' && !(x as Unit).dimensions.every((d) => d === 0)) throw new Error(`${name} acts on a quantity that has a dimension`);
+      return FUNCTIONS[name].impl(toNumber(x));
+    });
+  }
 
   const evaluateWithUnits = (node: { compile(): { evaluate(scope: Map<string, unknown>): unknown } }) => node.compile().evaluate(scope);
   const expect = (value: unknown, unitText: string, symbol: string, pointer: string) => {
@@ -25,8 +33,8 @@ export function checkDimensions(a: Analysed): DefinitionIssue[] {
     const raw = (err as Error).message;
     const why = /addScalar|subtractScalar|Units do not match|compare|larger|smaller|equalScalar/i.test(raw)
       ? 'it adds, subtracts or compares quantities of different dimensions'
-      : /log|exp|sin|cos|tan|pow/i.test(raw)
-        ? 'a logarithm, exponential, trigonometric function or exponent acts on a quantity that has a dimension'
+      : /log|exp|sin|cos|tan|pow|bessel/i.test(raw)
+        ? 'a logarithm, exponential, trigonometric or Bessel function or an exponent acts on a quantity that has a dimension'
         : raw;
     issues.push({ stage: 'dimensions', pointer, message: `the units of ${symbol} do not work out: ${why}. Make each term a dimensionless group or a quantity in consistent units.` });
   };

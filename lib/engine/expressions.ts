@@ -1,4 +1,5 @@
 import { parse, type MathNode } from 'mathjs';
+import { besseli, besselk } from 'bessel';
 import { symbolTex } from './tex-symbols';
 
 export { symbolTex };
@@ -36,6 +37,13 @@ export const FUNCTIONS: Record<string, { impl: (...a: number[]) => number; min: 
   tanh: { impl: Math.tanh, min: 1, max: 1 },
   sign: { impl: Math.sign, min: 1, max: 1 },
   hypot: { impl: Math.hypot, min: 2, max: 4 },
+  // Modified Bessel functions of the first and second kind, orders 0 and 1 (fins of varying section,
+  // annular fins, conduction in cylinders); polynomial approximations of the `bessel` package,
+  // about 1e-7 relative (checked against an ODE solution in validation/reference/fins.test.ts).
+  besselI0: { impl: (x) => besseli(x, 0), min: 1, max: 1, tex: 'I_0' },
+  besselI1: { impl: (x) => besseli(x, 1), min: 1, max: 1, tex: 'I_1' },
+  besselK0: { impl: (x) => (x > 0 ? besselk(x, 0) : NaN), min: 1, max: 1, tex: 'K_0' },
+  besselK1: { impl: (x) => (x > 0 ? besselk(x, 1) : NaN), min: 1, max: 1, tex: 'K_1' },
 };
 
 /** Named numeric constants usable without declaring them. */

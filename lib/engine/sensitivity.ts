@@ -1,5 +1,5 @@
 import type { MathNode } from 'mathjs';
-import { BUILTIN_CONSTANTS } from './expressions';
+import { BUILTIN_CONSTANTS, FUNCTIONS } from './expressions';
 import { brent, interpolate } from './solve';
 import type { CompiledDefinition } from './compile';
 
@@ -53,6 +53,11 @@ const FUNCS: Record<string, (args: Dual[]) => Dual> = {
   cosh: ([a]) => chain1(a, Math.cosh(a.v), Math.sinh(a.v)),
   tanh: ([a]) => { const t = Math.tanh(a.v); return chain1(a, t, 1 - t * t); },
   sign: ([a]) => constant(Math.sign(a.v), a.d.length),
+  // I0′ = I1, I1′ = I0 − I1/x, K0′ = −K1, K1′ = −K0 − K1/x (Abramowitz & Stegun 9.6.27).
+  besselI0: ([a]) => chain1(a, FUNCTIONS.besselI0.impl(a.v), FUNCTIONS.besselI1.impl(a.v)),
+  besselI1: ([a]) => { const i1 = FUNCTIONS.besselI1.impl(a.v); return chain1(a, i1, a.v === 0 ? 0.5 : FUNCTIONS.besselI0.impl(a.v) - i1 / a.v); },
+  besselK0: ([a]) => chain1(a, FUNCTIONS.besselK0.impl(a.v), -FUNCTIONS.besselK1.impl(a.v)),
+  besselK1: ([a]) => { const k1 = FUNCTIONS.besselK1.impl(a.v); return chain1(a, k1, -FUNCTIONS.besselK0.impl(a.v) - k1 / a.v); },
   hypot: (args) => {
     const v = Math.hypot(...args.map((x) => x.v));
     const d = new Float64Array(args[0].d.length);

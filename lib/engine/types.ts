@@ -30,8 +30,29 @@ export interface Accuracy { rel: number; basis: string; approximates?: string; b
 
 export const CATEGORIES = [
   'external-flow', 'internal-flow', 'free-convection', 'friction', 'boundary-layer', 'properties',
+  'extended-surfaces', 'heat-exchangers', 'tube-banks', 'non-circular-ducts', 'impinging-jets',
+  'condensation', 'boiling', 'pressure-losses', 'radiation',
 ] as const;
 export type Category = (typeof CATEGORIES)[number];
+
+/** How each category reads on the screens. */
+export const CATEGORY_LABELS: Record<Category, string> = {
+  'external-flow': 'External forced convection',
+  'internal-flow': 'Internal flow heat transfer',
+  'free-convection': 'Free convection',
+  friction: 'Pipe friction',
+  'boundary-layer': 'Boundary layers',
+  properties: 'Fluid properties',
+  'extended-surfaces': 'Fins and extended surfaces',
+  'heat-exchangers': 'Heat exchangers',
+  'tube-banks': 'Tube banks',
+  'non-circular-ducts': 'Non-circular ducts',
+  'impinging-jets': 'Impinging jets',
+  condensation: 'Condensation',
+  boiling: 'Boiling',
+  'pressure-losses': 'Pressure losses in fittings',
+  radiation: 'Thermal radiation',
+};
 
 export interface InputDef {
   symbol: string;

@@ -226,14 +226,15 @@ describe('calculations: templates, saved records, parametric runs and withdrawal
 
   it('governs templates like correlations: a template pinning a version that is not approved fails validation', async () => {
     const slug = `calc-test-template-${Date.now()}`;
-    const film = (await call('/api/correlations/film-temperature/versions/1', { cookie: author.cookie })).body.contentHash;
+    const visc = (await call('/api/correlations/air-viscosity-sutherland/versions/1', { cookie: author.cookie })).body.contentHash;
     const def = {
-      schemaVersion: 1, kind: 'template', title: 'Film temperature only', summary: 'Test template.', category: 'external-flow', situation: 'test',
-      inputs: [{ symbol: 'T_s', name: 'surface', unit: 'K' }, { symbol: 'T_inf', name: 'stream', unit: 'K' }],
-      steps: [{ key: 'film', kind: 'correlation', title: 'Film temperature', use: { slug: 'film-temperature', version: 1, contentHash: film }, inputs: { T_s: 'T_s', T_inf: 'T_inf' }, outputs: { T_f: 'T_f' } }],
-      outputs: [{ symbol: 'T_f', name: 'film temperature' }], references: [{ citation: 'Incropera et al. (2007), ch. 7' }],
+      schemaVersion: 1, kind: 'template', title: 'Air viscosity only', summary: 'Test template.', category: 'properties', situation: 'test',
+      inputs: [{ symbol: 'T', name: 'temperature', unit: 'K' }],
+      steps: [{ key: 'viscosity', kind: 'correlation', title: 'Air viscosity', use: { slug: 'air-viscosity-sutherland', version: 1, contentHash: visc }, inputs: { T: 'T' }, outputs: { mu: 'mu' } }],
+      outputs: [{ symbol: 'mu', name: 'dynamic viscosity' }], references: [{ citation: 'Sutherland (1893), Phil. Mag. 36:507' }],
     };
-    const cases = [300, 400, 500].map((T) => ({ label: `T_s = ${T} K`, inputs: { T_s: T, T_inf: 300 }, expected: { T_f: (T + 300) / 2 }, tolerance: { rel: 1e-12, why: 'arithmetic mean' }, source: { kind: 'common-practice', citation: 'definition of the film temperature' } }));
+    // Sutherland's law as the library states it (μ0 = 1.716e-5 Pa s at T0 = 273.15 K, S = 110.4 K): the case checks the wiring.
+    const cases = [300, 400, 500].map((T) => ({ label: `T = ${T} K`, inputs: { T }, expected: { mu: 1.716e-5 * (T / 273.15) ** 1.5 * (273.15 + 110.4) / (T + 110.4) }, tolerance: { rel: 1e-9, why: 'the same law re-typed' }, source: { kind: 'transcription', citation: 'Sutherland’s law re-typed: checks the wiring' } }));
     expect((await call('/api/correlations', { cookie: author.cookie, body: { slug, definition: def, checkCases: cases } })).status).toBe(200);
     expect((await call(`/api/correlations/${slug}/versions/1/submit`, { cookie: author.cookie, method: 'POST' })).status).toBe(200);
     expect((await call(`/api/correlations/${slug}/versions/1/decision`, { cookie: author.cookie, body: { decision: 'approve', waiver: FIXTURE_WAIVER, comment: '', password: author.password } })).body.error.code).toBe('forbidden:role');

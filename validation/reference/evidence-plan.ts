@@ -10,6 +10,7 @@ import { compiled, type CheckCase, type Definition } from '@/lib/engine';
 import { crossCheckTolerance } from '@/lib/engine/evidence';
 import type { LibraryEntry } from '@/lib/governance/library';
 import { REFERENCES } from './formulas';
+import { MAPPINGS } from './mappings';
 
 type Point = Record<string, number | string>;
 
@@ -20,10 +21,14 @@ interface Planned {
   /** cross-check: the other correlation, and fixed values for its inputs the case does not have. */
   partner?: string;
   partnerInputs?: Record<string, number>;
+  /** cross-check through a stated physical relation (validation/reference/mappings.ts): the partner's inputs and the expected value follow from it. */
+  via?: string;
   /** independent-solution and limit: the function in formulas.ts. */
   reference?: string;
   /** independent-solution: the model's own uncertainty, combined with the correlation's accuracy. */
   model?: number;
+  /** independent-solution of the very model the correlation states (an exact solution checked numerically): the tolerance is the numerical error alone. */
+  sameModel?: boolean;
   /** standard-formulation: a python3-iapws expression per output (T, P, … substituted from the point). */
   python?: Record<string, string>;
   /** limit and memory: the tolerance; memory: the recalled coefficients, times Re^(−½) of the point or `scale`. */
@@ -37,8 +42,16 @@ interface Planned {
 const xc = (slug: string, partner: string, points: Point[], partnerInputs?: Record<string, number>): Planned => ({
   slug, kind: 'cross-check', partner, partnerInputs, points, citation: '', why: '',
 });
+/** A cross-check through a stated physical relation between the two situations (mappings.ts). */
+const xv = (slug: string, partner: string, via: string, points: Point[], partnerInputs?: Record<string, number>): Planned => ({
+  slug, kind: 'cross-check', partner, via, partnerInputs, points, citation: '', why: '',
+});
 const ind = (slug: string, reference: string, model: number, points: Point[], citation: string, why: string): Planned => ({
   slug, kind: 'independent-solution', reference, model, points, citation, why,
+});
+/** The correlation's own model solved another way (numerically): the tolerance is the stated numerical error, not the correlation's accuracy. */
+const num = (slug: string, reference: string, error: number, points: Point[], citation: string, why: string): Planned => ({
+  slug, kind: 'independent-solution', reference, model: error, sameModel: true, points, citation, why,
 });
 const lim = (slug: string, reference: string, tolerance: number, points: Point[], citation: string, why: string): Planned => ({
   slug, kind: 'limit', reference, tolerance, points, citation, why,
@@ -60,6 +73,17 @@ const GZ = 'Graetz (1883) series, 24 eigenpairs found by shooting — validation
 const GZ_WHY = 'series truncation below 1e-6; the tolerance is the correlation’s stated accuracy';
 const TL = 'Thin-layer laminar solution: the vertical plate’s similarity solution (Ostrach 1953) mapped onto the body (Acrivos 1960, Raithby & Hollands 1975), with their conduction-layer correction — validation/reference/formulas.ts';
 const TL_WHY = 'thin-layer model uncertainty 10 % (Raithby & Hollands’ comparison with data; from memory) combined with the correlation’s stated accuracy';
+const FIN = 'The fin equation solved by finite volumes, 200 cells, energy-balance heat flow — validation/reference/fins.ts';
+const FIN_TIP = 'The fin equation with a convecting tip, solved by finite volumes — validation/reference/fins.ts';
+const FIN_WHY = 'the closed form is the exact solution of the model solved numerically: discretization error about 1e-6, tolerance 1e-4';
+const FIN_SHORT = 'A fin much shorter than 1/m is at the base temperature throughout: η → 1 as mL → 0';
+const FIN_SHORT_WHY = 'the next term −(mL)²/3 is below 1e-5 at these points';
+const FIN_LONG = 'A long fin with an insulated tip: η → 1/(mL) as mL → ∞ (tanh mL → 1)';
+const HX_ODE = 'The exchanger’s temperature equations integrated by the midpoint rule, 400 steps, counterflow by superposition — validation/reference/exchangers.ts';
+const HX_GRID = 'Cross-flow on a 200 × 200 grid of cells, each solved exactly for its mean temperatures — validation/reference/exchangers.ts';
+const HX_WHY = 'the closed form is the exact solution of the model solved numerically: numerical error about 1e-6, tolerance 1e-4';
+const HX_CR0 = 'As C_r → 0 every arrangement tends to one stream heated (or cooled) by a stream at constant temperature: ε = 1 − e^(−NTU), integrated numerically';
+const HX_CR0_WHY = 'exact at C_r = 0; numerical error about 1e-6';
 const AIR = 'Air(T={T}, P={P})';
 const AIR_CITE = 'Lemmon et al. (2000) equation of state, Lemmon & Jacobsen (2004) transport, computed by python3-iapws';
 
@@ -196,6 +220,55 @@ export const PLAN: Planned[] = [
     { T: 450, P: 1, nu_ref: 'Air(T=450, P=0.101325).nu', alpha_ref: 'Air(T=450, P=0.101325).alfa', p_ref: 101325, p: 1e6 },
     { T: 800, P: 0.02, nu_ref: 'Air(T=800, P=0.101325).nu', alpha_ref: 'Air(T=800, P=0.101325).alfa', p_ref: 101325, p: 2e4 },
   ], 'the stated 1 % for an ideal gas with pressure-independent μ and k'),
+
+  // ——— fins: the fin equation solved by finite volumes (validation/reference/fins.ts) ———
+  num('fin-efficiency-straight-rectangular', 'fin-fd-rectangular-adiabatic', 1e-4, [{ h: 25, k: 200, t: 0.002, L: 0.03 }, { h: 100, k: 180, t: 0.0015, L: 0.05 }, { h: 400, k: 50, t: 0.004, L: 0.08 }], FIN, FIN_WHY),
+  lim('fin-efficiency-straight-rectangular', 'fin-limit-short', 1e-4, [{ h: 10, k: 400, t: 0.005, L: 0.001 }], FIN_SHORT, FIN_SHORT_WHY),
+  lim('fin-efficiency-straight-rectangular', 'fin-limit-long-rectangular', 1e-4, [{ h: 200, k: 20, t: 0.002, L: 0.06 }], FIN_LONG, 'tanh(mL) = 1 − 1.2e-5 at mL = 6'),
+  ind('fin-efficiency-straight-rectangular-corrected-length', 'fin-fd-rectangular-convective', 1e-4, [{ h: 40, k: 200, t: 0.003, L: 0.02 }, { h: 150, k: 16, t: 0.004, L: 0.03 }], FIN_TIP, 'the corrected length approximates tip convection: its stated 2.5 %, with the numerical error'),
+  xc('fin-efficiency-straight-rectangular-corrected-length', 'fin-straight-rectangular-convective-tip', [{ h: 300, k: 40, t: 0.02, L: 0.01 }]),
+  lim('fin-efficiency-straight-rectangular-corrected-length', 'fin-limit-short', 1e-4, [{ h: 10, k: 400, t: 0.0005, L: 0.0005 }], FIN_SHORT, FIN_SHORT_WHY),
+  num('fin-straight-rectangular-convective-tip', 'fin-fd-rectangular-convective', 1e-4, [{ h: 40, k: 200, t: 0.003, L: 0.02 }, { h: 150, k: 16, t: 0.004, L: 0.03 }, { h: 800, k: 400, t: 0.01, L: 0.1 }], FIN_TIP, FIN_WHY),
+  lim('fin-straight-rectangular-convective-tip', 'fin-limit-thin-tip', 5e-4, [{ h: 0.01, k: 400, t: 0.0008, L: 5 }], 'A fin whose tip is negligible against its faces (t/L → 0) has the insulated-tip efficiency tanh(mL)/(mL)', 'the tip face is t/(2L) = 8e-5 of the surface'),
+  num('fin-efficiency-pin-adiabatic', 'fin-fd-pin-adiabatic', 1e-4, [{ h: 30, k: 200, D: 0.003, L: 0.02 }, { h: 120, k: 15, D: 0.005, L: 0.03 }, { h: 500, k: 390, D: 0.002, L: 0.05 }], FIN, FIN_WHY),
+  lim('fin-efficiency-pin-adiabatic', 'fin-limit-short', 1e-4, [{ h: 5, k: 400, D: 0.01, L: 0.001 }], FIN_SHORT, FIN_SHORT_WHY),
+  lim('fin-efficiency-pin-adiabatic', 'fin-limit-long-pin', 1e-4, [{ h: 100, k: 25, D: 0.004, L: 0.095 }], FIN_LONG, 'tanh(mL) = 1 − 1.2e-5 at mL = 6'),
+  ind('fin-efficiency-pin-corrected-length', 'fin-fd-pin-convective', 1e-4, [{ h: 30, k: 200, D: 0.003, L: 0.02 }, { h: 200, k: 20, D: 0.006, L: 0.01 }, { h: 60, k: 100, D: 0.01, L: 0.15 }], FIN_TIP, 'the corrected length approximates tip convection: its stated 2.5 %, with the numerical error'),
+  lim('fin-efficiency-pin-corrected-length', 'fin-limit-short', 1e-4, [{ h: 5, k: 400, D: 0.002, L: 0.0005 }], FIN_SHORT, FIN_SHORT_WHY),
+  num('fin-efficiency-annular', 'fin-fd-annular-adiabatic-corrected', 1e-4, [{ h: 50, k: 200, t: 0.001, r_1: 0.01, r_2: 0.025 }, { h: 150, k: 60, t: 0.002, r_1: 0.0125, r_2: 0.05 }, { h: 30, k: 400, t: 0.0005, r_1: 0.005, r_2: 0.04 }], FIN + ' (annular: insulated edge at the corrected radius)', FIN_WHY),
+  ind('fin-efficiency-annular', 'fin-fd-annular-convective', 1e-4, [{ h: 300, k: 40, t: 0.005, r_1: 0.02, r_2: 0.04 }], FIN_TIP + ' (annular: the real edge at r_2 convecting)', 'the corrected radius stands for edge convection: its stated 1 %, with the numerical error'),
+  lim('fin-efficiency-annular', 'fin-limit-thin-annulus', 0.005, [{ h: 60, k: 200, t: 0.001, r_1: 10, r_2: 10.02 }], 'An annulus whose width is small against its radius is a straight fin of length r_2c − r_1: η = tanh(m L_c)/(m L_c)', 'curvature adds O((r_2 − r_1)/r_1) = 0.2 %'),
+  xc('fin-efficiency-annular-schmidt', 'fin-efficiency-annular', [{ h: 50, k: 200, t: 0.001, r_1: 0.01, r_2: 0.025 }, { h: 80, k: 120, t: 0.0015, r_1: 0.008, r_2: 0.03 }]),
+  ind('fin-efficiency-annular-schmidt', 'fin-fd-annular-adiabatic-corrected', 1e-4, [{ h: 30, k: 400, t: 0.0005, r_1: 0.005, r_2: 0.02 }], FIN + ' (annular: insulated edge at the corrected radius)', 'Schmidt’s stated 2 % with the numerical error'),
+  lim('fin-efficiency-annular-schmidt', 'fin-limit-thin-annulus', 0.005, [{ h: 60, k: 200, t: 0.001, r_1: 10, r_2: 10.02 }], 'An annulus whose width is small against its radius is a straight fin of length r_2c − r_1: η = tanh(m L_c)/(m L_c)', 'curvature adds O((r_2 − r_1)/r_1) = 0.2 %'),
+  num('fin-efficiency-straight-triangular', 'fin-fd-triangular', 1e-4, [{ h: 25, k: 200, t_b: 0.004, L: 0.03 }, { h: 100, k: 180, t_b: 0.003, L: 0.05 }, { h: 300, k: 50, t_b: 0.006, L: 0.06 }], FIN + ' (thickness falling linearly to zero)', FIN_WHY),
+  lim('fin-efficiency-straight-triangular', 'fin-limit-short', 1e-4, [{ h: 10, k: 400, t_b: 0.005, L: 0.001 }], FIN_SHORT, FIN_SHORT_WHY),
+  ind('fin-array-overall-efficiency-rectangular', 'fin-array-fd', 1e-4, [{ h: 40, k: 200, t: 0.002, L: 0.03, s: 0.004 }, { h: 150, k: 16, t: 0.004, L: 0.03, s: 0.01 }, { h: 25, k: 170, t: 0.001, L: 0.08, s: 0.002 }], FIN_TIP + ' with the exposed base at the base temperature', 'the corrected-length fin efficiency’s stated 2.5 %, with the numerical error'),
+  lim('fin-array-overall-efficiency-rectangular', 'fin-limit-short', 0.002, [{ h: 40, k: 200, t: 0.002, L: 0.03, s: 60 }], 'Fins far apart: the surface is nearly all bare base, η_o → 1', 'the fins are 0.1 % of the surface'),
+
+  // ——— heat exchangers: the exchangers' equations solved numerically (validation/reference/exchangers.ts) ———
+  num('hx-effectiveness-counterflow', 'hx-ode-counterflow', 1e-4, [{ NTU: 0.5, C_r: 0.25 }, { NTU: 2, C_r: 0.75 }, { NTU: 3, C_r: 1 }, { NTU: 8, C_r: 0.5 }], HX_ODE, HX_WHY),
+  lim('hx-effectiveness-counterflow', 'hx-ode-single-stream', 1e-4, [{ NTU: 1.5, C_r: 0 }], HX_CR0, HX_CR0_WHY),
+  num('hx-effectiveness-parallel-flow', 'hx-ode-parallel', 1e-4, [{ NTU: 0.5, C_r: 0.25 }, { NTU: 2, C_r: 0.6 }, { NTU: 5, C_r: 1 }], HX_ODE, HX_WHY),
+  lim('hx-effectiveness-parallel-flow', 'hx-ode-single-stream', 1e-4, [{ NTU: 1.5, C_r: 0 }], HX_CR0, HX_CR0_WHY),
+  num('hx-effectiveness-shell-and-tube-one-shell-pass', 'hx-ode-one-shell-shell-min', 1e-4, [{ NTU: 0.5, C_r: 0.3 }, { NTU: 3, C_r: 1 }], HX_ODE + ' (1-2: the shell fluid is C_min)', HX_WHY),
+  num('hx-effectiveness-shell-and-tube-one-shell-pass', 'hx-ode-one-shell-tube-min', 1e-4, [{ NTU: 1.5, C_r: 0.6 }], HX_ODE + ' (1-2: the tube fluid is C_min)', HX_WHY),
+  lim('hx-effectiveness-shell-and-tube-one-shell-pass', 'hx-ode-single-stream', 1e-4, [{ NTU: 2, C_r: 0 }], HX_CR0, HX_CR0_WHY),
+  ind('hx-effectiveness-crossflow-both-unmixed', 'hx-series-crossflow-unmixed', 0, [{ NTU: 0.3, C_r: 0.2 }, { NTU: 2, C_r: 0.6 }], 'Mason (1955) exact series for cross-flow with both streams unmixed (Baclic 1990 form), summed to 1e-16 — validation/reference/exchangers.ts', 'the approximation’s stated 4 % (the series is exact)'),
+  ind('hx-effectiveness-crossflow-both-unmixed', 'hx-grid-crossflow-unmixed', 1e-4, [{ NTU: 6, C_r: 1 }], HX_GRID, 'the approximation’s stated 4 % with the grid’s error'),
+  lim('hx-effectiveness-crossflow-both-unmixed', 'hx-ode-single-stream', 1e-4, [{ NTU: 1.5, C_r: 1e-6 }], HX_CR0, 'C_r = 1e-6 differs from the limit by about 1e-6'),
+  num('hx-effectiveness-crossflow-cmax-mixed', 'hx-grid-crossflow-cmax-mixed', 1e-4, [{ NTU: 0.5, C_r: 0.25 }, { NTU: 2, C_r: 0.6 }, { NTU: 4, C_r: 1 }], HX_GRID + ' (C_max mixed across each row)', HX_WHY),
+  lim('hx-effectiveness-crossflow-cmax-mixed', 'hx-ode-single-stream', 1e-4, [{ NTU: 1.5, C_r: 1e-6 }], HX_CR0, 'C_r = 1e-6 differs from the limit by about 1e-6'),
+  num('hx-effectiveness-crossflow-cmin-mixed', 'hx-grid-crossflow-cmin-mixed', 1e-4, [{ NTU: 0.5, C_r: 0.25 }, { NTU: 2, C_r: 0.6 }, { NTU: 4, C_r: 1 }], HX_GRID + ' (C_min mixed across each column)', HX_WHY),
+  lim('hx-effectiveness-crossflow-cmin-mixed', 'hx-ode-single-stream', 1e-4, [{ NTU: 1.5, C_r: 1e-6 }], HX_CR0, 'C_r = 1e-6 differs from the limit by about 1e-6'),
+  num('hx-effectiveness-capacity-ratio-zero', 'hx-ode-single-stream', 1e-4, [{ NTU: 0.2 }, { NTU: 1.5 }, { NTU: 6 }], HX_ODE + ' (one stream)', HX_WHY),
+  lim('hx-effectiveness-capacity-ratio-zero', 'hx-limit-small-ntu', 1e-3, [{ NTU: 0.001 }], 'A small exchanger transfers in proportion to its size: ε → NTU as NTU → 0', 'the next term is −NTU/2 = 5e-4 at NTU = 0.001'),
+  num('hx-lmtd-correction-one-shell-pass', 'hx-ode-lmtd-correction', 1e-4, [{ P: 0.2, R: 0.5 }, { P: 0.4, R: 1 }, { P: 0.3, R: 2 }], HX_ODE + ' (1-2 exchanger: the tube-side NTU that gives P found by bisection, then F = ln[(1 − PR)/(1 − P)]/((1 − R) NTU))', HX_WHY),
+  lim('hx-lmtd-correction-one-shell-pass', 'hx-limit-no-correction', 1e-3, [{ P: 1e-4, R: 0.8 }], 'A nearly isothermal tube stream (P → 0) makes every arrangement equivalent: F → 1', 'F − 1 = O(P²) = 1e-8 at P = 1e-4'),
+  num('hx-log-mean-temperature-difference', 'hx-ode-mean-temperature-difference', 1e-4, [{ dT_1: 40, dT_2: 10 }, { dT_1: 5, dT_2: 60 }, { dT_1: 100, dT_2: 80 }], HX_ODE + ' (the local difference along the area averaged by quadrature)', 'the midpoint rule and the trapezoid quadrature leave about 3e-6'),
+  lim('hx-log-mean-temperature-difference', 'hx-limit-arithmetic-mean', 1e-4, [{ dT_1: 20, dT_2: 20.2 }], 'Equal terminal differences: the difference is uniform and the mean is the arithmetic one', 'a 1 % difference between the ends moves the log mean 8e-6 below the arithmetic mean'),
+  num('hx-ntu-counterflow', 'hx-ode-ntu-counterflow', 1e-4, [{ eps: 0.3, C_r: 0.2 }, { eps: 0.6, C_r: 0.7 }, { eps: 0.8, C_r: 0.95 }], HX_ODE + ' (the NTU that gives ε found by bisection)', HX_WHY),
+  lim('hx-ntu-counterflow', 'hx-limit-small-eps', 2e-3, [{ eps: 0.001, C_r: 0.5 }], 'A small duty needs a proportionally small exchanger: NTU → ε as ε → 0', 'the next term is ε(1 + C_r)/2 = 7.5e-4 at ε = 0.001'),
 ];
 
 /** The partner's inputs: the case's values for the symbols it shares, then the fixed ones the locator names. */
@@ -204,9 +277,36 @@ export function partnerInputsOf(partner: Definition, inputs: Record<string, numb
   return Object.fromEntries(partner.inputs.map((i) => [i.symbol, all[i.symbol]]).filter(([, v]) => v !== undefined));
 }
 
+/**
+ * The expected value of a cross-check: the partner evaluated at the case's inputs (its own fixed values for
+ * inputs the case does not have), or, through a stated relation, at the inputs the relation gives and mapped back.
+ * Used by the plan and by the library test, which recomputes every cross-check from its locator.
+ */
+export function crossCheckExpected(own: Definition, partner: Definition, inputs: Record<string, number>, fixed: Record<string, number> = {}, via?: string): { expected: Record<string, number>; warnings: string[] } {
+  const m = via ? MAPPINGS[via] : undefined;
+  if (via && !m) throw new Error(`unknown relation "${via}" (validation/reference/mappings.ts)`);
+  const partnerIn = m ? { ...partnerInputsOf(partner, inputs, fixed), ...m.inputs(inputs, fixed) } : partnerInputsOf(partner, inputs, fixed);
+  const result = compiled(partner).evaluate(partnerIn);
+  const mapped = m ? m.expected(result.outputs, inputs) : result.outputs;
+  const expected = Object.fromEntries(own.outputs.map((o) => o.symbol).filter((s) => mapped[s] !== undefined).map((s) => [s, mapped[s]]));
+  return { expected, warnings: result.warnings.map((w) => w.symbol) };
+}
+
+/** Reads a cross-check locator: correlation:<slug>?via=<relation>&<input>=<value>… */
+export function parseCrossCheckLocator(locator: string | undefined): { partner: string; via?: string; fixed: Record<string, number> } | null {
+  const m = /^correlation:([a-z0-9-]+)(?:\?(.*))?$/.exec(locator ?? '');
+  if (!m) return null;
+  const params = [...new URLSearchParams(m[2] ?? '').entries()];
+  const via = params.find(([k]) => k === 'via')?.[1];
+  return { partner: m[1], via, fixed: Object.fromEntries(params.filter(([k]) => k !== 'via').map(([k, v]) => [k, Number(v)])) };
+}
+
 /** The locator of a planned case: where the test finds its value again. */
 function locatorOf(p: Planned, inputs: Record<string, number | string>): string {
-  if (p.kind === 'cross-check') return `correlation:${p.partner}${p.partnerInputs ? `?${Object.entries(p.partnerInputs).map(([k, v]) => `${k}=${v}`).join('&')}` : ''}`;
+  if (p.kind === 'cross-check') {
+    const query = [...(p.via ? [`via=${p.via}`] : []), ...Object.entries(p.partnerInputs ?? {}).map(([k, v]) => `${k}=${v}`)];
+    return `correlation:${p.partner}${query.length ? `?${query.join('&')}` : ''}`;
+  }
   if (p.python) return `python3-iapws: ${Object.entries(p.python).map(([s, e]) => `${s} = ${fill(e, inputs)}`).join('; ')}`.slice(0, 200);
   if (p.kind === 'memory') return 'recalled, not looked up: see the citation';
   return `validation/reference/formulas.ts#${p.reference}`;
@@ -247,18 +347,20 @@ export function plannedCases(library: LibraryEntry[], python: (exprs: string[]) 
         const partner = bySlug.get(p.partner!);
         if (!partner) throw new Error(`evidence plan: ${p.slug} names an unknown partner ${p.partner}`);
         const pdef = partner.definition as unknown as Definition;
-        const result = compiled(pdef).evaluate(partnerInputsOf(pdef, inputs, p.partnerInputs));
-        if (result.warnings.length) throw new Error(`evidence plan: ${p.slug} × ${p.partner} at ${JSON.stringify(inputs)} leaves the partner's range (${result.warnings.map((w) => w.symbol).join(', ')})`);
-        expected = Object.fromEntries(outputs.filter((s) => result.outputs[s] !== undefined).map((s) => [s, result.outputs[s]]));
+        const x = crossCheckExpected(def, pdef, inputs, p.partnerInputs, p.via);
+        if (x.warnings.length) throw new Error(`evidence plan: ${p.slug} × ${p.partner} at ${JSON.stringify(inputs)} leaves the partner's range (${x.warnings.join(', ')})`);
+        expected = x.expected;
         const t = crossCheckTolerance({ slug: p.slug, accuracy: def.accuracy }, { slug: p.partner!, accuracy: pdef.accuracy });
         if (t === null) throw new Error(`evidence plan: ${p.slug} × ${p.partner}: both need a stated accuracy`);
-        rel = t;
+        const m = p.via ? MAPPINGS[p.via] : undefined;
+        rel = m?.rel ? up(Math.hypot(t, m.rel)) : t;
         const a = def.accuracy!;
         const b = pdef.accuracy!;
-        citation = `${pdef.title} — another approved correlation in the library`;
+        citation = `${pdef.title} — another approved correlation in the library${m ? `, through ${m.relation}` : ''}`;
         why = a.approximates === p.partner ? `this form approximates ${p.partner} within ${a.rel * 100} % (stated)`
           : b.approximates === p.slug ? `${p.partner} approximates this one within ${b.rel * 100} % (stated)`
             : `√(${a.rel * 100} %² + ${b.rel * 100} %²): the two stated accuracies combined as independent errors`;
+        if (m?.rel) why += `, with ${m.rel * 100} % for the relation (${m.relUncertainty})`;
       } else if (p.kind === 'memory') {
         // Recalled coefficients of the Blasius solution, scaled by Re^(−½) of the point.
         const factor = p.scale ? p.scale(inputs) : 1 / Math.sqrt(Object.values(inputs)[0]);
@@ -271,10 +373,10 @@ export function plannedCases(library: LibraryEntry[], python: (exprs: string[]) 
       } else {
         const values = REFERENCES[p.reference!](inputs);
         expected = Object.fromEntries(outputs.filter((s) => values[s] !== undefined).map((s) => [s, values[s]]));
-        rel = p.kind === 'independent-solution' ? up(Math.max(Math.hypot(def.accuracy?.rel ?? 0, p.model ?? 0), 1e-4)) : p.tolerance!;
+        rel = p.kind !== 'independent-solution' ? p.tolerance! : p.sameModel ? p.model! : up(Math.max(Math.hypot(def.accuracy?.rel ?? 0, p.model ?? 0), 1e-4));
       }
       if (!Object.keys(expected).length) throw new Error(`evidence plan: ${p.slug} ← ${p.partner ?? p.reference}: no output in common`);
-      const label = `${p.kind === 'cross-check' ? `vs ${p.partner}` : p.kind === 'standard-formulation' ? 'standard formulation' : p.kind === 'limit' ? `limit (${p.reference})` : p.kind === 'memory' ? 'recalled published value' : `independent (${p.reference})`} at ${Object.entries(inputs).map(([k, v]) => `${k} = ${fmt(v)}`).join(', ')}`;
+      const label = `${p.kind === 'cross-check' ? `vs ${p.partner}${p.via ? ` via ${p.via}` : ''}` : p.kind === 'standard-formulation' ? 'standard formulation' : p.kind === 'limit' ? `limit (${p.reference})` : p.kind === 'memory' ? 'recalled published value' : `independent (${p.reference})`} at ${Object.entries(inputs).map(([k, v]) => `${k} = ${fmt(v)}`).join(', ')}`;
       const c: CheckCase = {
         label: label.slice(0, 200),
         inputs,
@@ -290,7 +392,7 @@ export function plannedCases(library: LibraryEntry[], python: (exprs: string[]) 
 
 /** Whether a check case in a library file is one the plan writes (and so rewrites): the plan's labels have one shape. */
 export function isPlanned(c: CheckCase): boolean {
-  return /^(vs [a-z0-9-]+|standard formulation|limit \([a-z0-9-]+\)|independent \([a-z0-9-]+\)|recalled Blasius constant|recalled published value) at /.test(c.label);
+  return /^(vs [a-z0-9-]+( via [a-z0-9-]+)?|standard formulation|limit \([a-z0-9-]+\)|independent \([a-z0-9-]+\)|recalled Blasius constant|recalled published value) at /.test(c.label);
 }
 
 /** Python source that evaluates a JSON list of python3-iapws expressions read from standard input. */

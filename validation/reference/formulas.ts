@@ -7,6 +7,8 @@
  * ("validation/reference/formulas.ts#<key>"); validation/library.test.ts recomputes it.
  */
 import { mixingLengthPipe, turbulentLayer, turbulentLayerNusselt } from './turbulence';
+import { annular, pin, solveFin, straightRectangular, straightTriangular, type FinGeometry } from './fins';
+import { counterflowEffectiveness, counterflowMeanTemperatureDifference, crossflowEffectiveness, crossflowUnmixedSeries, oneShellTwoTubeCorrectionFactor, oneShellTwoTubePassEffectiveness, parallelFlowEffectiveness, singleStreamEffectiveness } from './exchangers';
 import { blasius, graetzMeanNusselt, graetzNusseltUWT, levequeUniformFluxCoefficient, ostrachG, simpsonSamples, pohlhausenNusseltCoefficient, powerLawWallNusseltCoefficient, thermalThicknessEta } from './similarity';
 
 type Inputs = Record<string, number>;
@@ -148,7 +150,6 @@ Object.assign(REFERENCES, {
   'air-conductivity-sutherland': ({ T }: Inputs) => ({ k: 0.0241 * (T / 273) ** 1.5 * (273 + 194) / (T + 194) }),
   'ideal-gas-density': ({ p, T, M }: Inputs) => ({ rho: (p * M) / (8.314462618 * T) }),
   'gas-kinematic-property-pressure-correction': ({ nu_ref, alpha_ref, p_ref, p }: Inputs) => ({ nu: (nu_ref * p_ref) / p, alpha: (alpha_ref * p_ref) / p }),
-  'film-temperature': ({ T_s, T_inf }: Inputs) => ({ T_f: (T_s + T_inf) / 2 }),
   'air-density-dry-ideal-gas-1bar': ({ T }: Inputs) => ({ rho: 1e5 / (R_AIR * T) }),
   // U.S. Standard Atmosphere 1976 conductivity law k = 2.64638e-3 T^1.5 / (T + 245.4 × 10^(−12/T)).
   'air-conductivity-ussa76': ({ T }: Inputs) => ({ k: (2.64638e-3 * T ** 1.5) / (T + 245.4 * 10 ** (-12 / T)) }),
@@ -260,4 +261,54 @@ Object.assign(REFERENCES, {
     return { Nu_D: 2 / Math.log(1 + 2 / thin) };
   },
   'thin-layer-sphere': ({ Ra_D, Pr }: Inputs) => ({ Nu_D: 2 + thinLayerFactor(5 / 3, false) * plateMeanCoefficient(Pr ?? 0.71) * Ra_D ** 0.25 }),
+});
+
+/**
+ * Fins: the fin equation solved by finite volumes (fins.ts); limits of short and long fins.
+ * Heat exchangers: the exchanger ODEs, cross-flow grids and the exact cross-flow series (exchangers.ts).
+ */
+const finEfficiency = (g: FinGeometry, h: number, k: number, tip: 'adiabatic' | 'convective') => solveFin(g, h, k, tip, 200).efficiency;
+Object.assign(REFERENCES, {
+  'fin-fd-rectangular-adiabatic': ({ h, k, t, L }: Inputs) => ({ eta_f: finEfficiency(straightRectangular(t, L), h, k, 'adiabatic') }),
+  'fin-fd-rectangular-convective': ({ h, k, t, L }: Inputs) => ({ eta_f: finEfficiency(straightRectangular(t, L), h, k, 'convective') }),
+  'fin-fd-pin-adiabatic': ({ h, k, D, L }: Inputs) => ({ eta_f: finEfficiency(pin(D, L), h, k, 'adiabatic') }),
+  'fin-fd-pin-convective': ({ h, k, D, L }: Inputs) => ({ eta_f: finEfficiency(pin(D, L), h, k, 'convective') }),
+  'fin-fd-annular-adiabatic-corrected': ({ h, k, t, r_1, r_2 }: Inputs) => ({ eta_f: finEfficiency(annular(t, r_1, r_2 + t / 2), h, k, 'adiabatic') }),
+  'fin-fd-annular-convective': ({ h, k, t, r_1, r_2 }: Inputs) => ({ eta_f: finEfficiency(annular(t, r_1, r_2), h, k, 'convective') }),
+  'fin-fd-triangular': ({ h, k, t_b, L }: Inputs) => ({ eta_f: finEfficiency(straightTriangular(t_b, L), h, k, 'adiabatic') }),
+  // Base between the fins at the base temperature (efficiency 1) plus one convecting-tip fin solved numerically.
+  'fin-array-fd': ({ h, k, t, L, s }: Inputs) => { const f = solveFin(straightRectangular(t, L), h, k, 'convective', 200); return { eta_o: (h * s + f.q) / (h * (s + 2 * L + t)) }; },
+  // A short fin is at the base temperature throughout: η → 1 as mL → 0 (the next term is −(mL)²/3).
+  'fin-limit-short': () => ({ eta_f: 1, eta_o: 1 }),
+  // A long fin with an insulated tip: η → 1/(mL) as mL → ∞ (tanh → 1).
+  'fin-limit-long-rectangular': ({ h, k, t, L }: Inputs) => ({ eta_f: 1 / (Math.sqrt((2 * h) / (k * t)) * L) }),
+  'fin-limit-long-pin': ({ h, k, D, L }: Inputs) => ({ eta_f: 1 / (Math.sqrt((4 * h) / (k * D)) * L) }),
+  // A tip negligible against the faces (t/L → 0): the insulated-tip efficiency tanh(mL)/(mL).
+  'fin-limit-thin-tip': ({ h, k, t, L }: Inputs) => { const m = Math.sqrt((2 * h) / (k * t)); return { eta_f: Math.tanh(m * L) / (m * L) }; },
+
+  'hx-ode-counterflow': ({ NTU, C_r }: Inputs) => ({ eps: counterflowEffectiveness(NTU, C_r) }),
+  'hx-ode-parallel': ({ NTU, C_r }: Inputs) => ({ eps: parallelFlowEffectiveness(NTU, C_r) }),
+  'hx-ode-one-shell-shell-min': ({ NTU, C_r }: Inputs) => ({ eps: oneShellTwoTubePassEffectiveness(NTU, C_r, true) }),
+  'hx-ode-one-shell-tube-min': ({ NTU, C_r }: Inputs) => ({ eps: oneShellTwoTubePassEffectiveness(NTU, C_r, false) }),
+  'hx-series-crossflow-unmixed': ({ NTU, C_r }: Inputs) => ({ eps: crossflowUnmixedSeries(NTU, C_r) }),
+  'hx-grid-crossflow-unmixed': ({ NTU, C_r }: Inputs) => ({ eps: crossflowEffectiveness(NTU, C_r, 'none') }),
+  'hx-grid-crossflow-cmax-mixed': ({ NTU, C_r }: Inputs) => ({ eps: crossflowEffectiveness(NTU, C_r, 'Cmax', 100) }),
+  'hx-grid-crossflow-cmin-mixed': ({ NTU, C_r }: Inputs) => ({ eps: crossflowEffectiveness(NTU, C_r, 'Cmin', 100) }),
+  'hx-ode-single-stream': ({ NTU }: Inputs) => ({ eps: singleStreamEffectiveness(NTU) }),
+  'hx-ode-lmtd-correction': ({ P, R }: Inputs) => ({ F: oneShellTwoTubeCorrectionFactor(P, R) }),
+  'hx-ode-mean-temperature-difference': ({ dT_1, dT_2 }: Inputs) => ({ dT_lm: counterflowMeanTemperatureDifference(dT_1, dT_2) }),
+  'hx-ode-ntu-counterflow': ({ eps, C_r }: Inputs) => {
+    let lo = 0; let hi = 1;
+    // 100 midpoint steps: numerical error about 1e-6, well inside the 1e-4 tolerance.
+    while (counterflowEffectiveness(hi, C_r, 100) < eps) hi *= 2;
+    for (let i = 0; i < 80; i++) { const mid = (lo + hi) / 2; if (counterflowEffectiveness(mid, C_r, 100) < eps) lo = mid; else hi = mid; }
+    return { NTU: (lo + hi) / 2 };
+  },
+  // Limits: equal terminal differences give their arithmetic mean; F → 1 as P → 0; ε → NTU as NTU → 0.
+  'hx-limit-arithmetic-mean': ({ dT_1, dT_2 }: Inputs) => ({ dT_lm: (dT_1 + dT_2) / 2 }),
+  'hx-limit-no-correction': () => ({ F: 1 }),
+  'hx-limit-small-ntu': ({ NTU }: Inputs) => ({ eps: NTU }),
+  'hx-limit-small-eps': ({ eps }: Inputs) => ({ NTU: eps }),
+  // An annulus narrow against its radius is a straight fin of length r_2c − r_1 (corrected length).
+  'fin-limit-thin-annulus': ({ h, k, t, r_1, r_2 }: Inputs) => { const m = Math.sqrt((2 * h) / (k * t)); const Lc = r_2 + t / 2 - r_1; return { eta_f: Math.tanh(m * Lc) / (m * Lc) }; },
 });

@@ -8,8 +8,8 @@ import { api, ApiError } from '@/lib/client/api';
 import { QueryState } from '@/components/ui/query-state';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { Field } from '@/components/ui/field';
+import { CATEGORIES, CATEGORY_LABELS } from '@/lib/engine/types';
 
-const CATEGORIES = ['external-flow', 'internal-flow', 'free-convection', 'friction', 'boundary-layer', 'properties'];
 
 /** A schema-valid starting point; the author replaces the placeholder input, output and reference. */
 function starter(title: string, category: string, situation: string) {
@@ -71,7 +71,7 @@ export function AuthorHome() {
         {errors.form && !errors.slug && <p role="alert" className="text-sm text-danger">{errors.form}</p>}
         <Field label="Slug (stable public identifier)" error={errors.slug} hint="e.g. duct-rectangular-laminar">{(p) => <input {...p} className="field-input font-mono" value={form.slug} onChange={(e) => setForm({ ...form, slug: e.target.value })} />}</Field>
         <Field label="Title" error={errors.title}>{(p) => <input {...p} className="field-input" value={form.title} onChange={(e) => setForm({ ...form, title: e.target.value })} />}</Field>
-        <Field label="Category">{(p) => <select {...p} className="field-input" value={form.category} onChange={(e) => setForm({ ...form, category: e.target.value })}>{CATEGORIES.map((c) => <option key={c}>{c}</option>)}</select>}</Field>
+        <Field label="Category">{(p) => <select {...p} className="field-input" value={form.category} onChange={(e) => setForm({ ...form, category: e.target.value })}>{CATEGORIES.map((c) => <option key={c} value={c}>{CATEGORY_LABELS[c]}</option>)}</select>}</Field>
         <Field label="Situation" error={errors.situation} hint="Correlations with the same situation can be compared">{(p) => <input {...p} className="field-input" value={form.situation} onChange={(e) => setForm({ ...form, situation: e.target.value })} />}</Field>
         <button className="btn-primary" disabled={create.isPending}>Create draft</button>
       </form>

@@ -6,6 +6,7 @@ import { useEffect, useState } from 'react';
 import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 import { api } from '@/lib/client/api';
 import { StatusBadge } from '@/components/ui/status-badge';
+import { CATEGORIES, CATEGORY_LABELS } from '@/lib/engine/types';
 
 interface Item {
   slug: string; title: string; category: string; situation: string; latestApprovedVersion: number | null;
@@ -13,7 +14,6 @@ interface Item {
 }
 type SortKey = 'title' | 'category' | 'updated' | 'slug';
 
-const CATEGORIES = ['external-flow', 'internal-flow', 'free-convection', 'friction', 'boundary-layer', 'properties'];
 const PAGE_SIZE = 25;
 
 export function LibraryTable() {
@@ -70,7 +70,7 @@ export function LibraryTable() {
           <span className="mb-1 block font-medium">Category</span>
           <select className="field-input" value={category} onChange={(e) => { setCategory(e.target.value); setPage(1); }}>
             <option value="">all</option>
-            {CATEGORIES.map((c) => <option key={c} value={c}>{c}</option>)}
+            {CATEGORIES.map((c) => <option key={c} value={c}>{CATEGORY_LABELS[c]}</option>)}
           </select>
         </label>
         <label className="text-sm">
@@ -103,7 +103,7 @@ export function LibraryTable() {
                   <div className="font-mono text-xs text-ink-faint">{c.slug}</div>
                 </td>
                 <td>{c.situation}</td>
-                <td>{c.category}</td>
+                <td>{CATEGORY_LABELS[c.category as keyof typeof CATEGORY_LABELS] ?? c.category}</td>
                 <td>{c.latestApprovedVersion ? <span className="font-mono">v{c.latestApprovedVersion}</span> : <span className="text-ink-faint">none</span>}
                   {c.latestStatus !== 'approved' && <div className="mt-0.5"><StatusBadge status={c.latestStatus} /> <span className="text-xs text-ink-faint">v{c.latestVersion}</span></div>}</td>
                 <td className="text-xs" title="evidence grade of the approved version">{c.evidenceGrade ?? '—'}</td>
