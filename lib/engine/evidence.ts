@@ -89,5 +89,6 @@ export function crossCheckTolerance(a: { slug: string; accuracy?: Accuracy | nul
   if (a.accuracy.approximates === b.slug) return up(a.accuracy.rel);
   if (b.accuracy.approximates === a.slug) return up(b.accuracy.rel);
   if (a.accuracy.approximates && a.accuracy.approximates === b.accuracy.approximates) return up(a.accuracy.rel + b.accuracy.rel);
-  return up(Math.hypot(a.accuracy.rel, b.accuracy.rel));
+  // Two exact relations still differ by the rounding of their published constants: at least 0.1 %.
+  return up(Math.max(Math.hypot(a.accuracy.rel, b.accuracy.rel), 1e-9));
 }

@@ -91,8 +91,8 @@ describe('calculation chains', () => {
     expect(dim[0].message).toMatch(/p is in Pa but air-properties-1atm takes T in K/);
     const later = issuesOf((d) => { (d.steps[3] as { outputs: { expression: string }[] }).outputs[0].expression = 'u_inf * L / nu * h'; });
     expect(later[0].message).toMatch(/"h" is not declared before this step/);
-    const pin = issuesOf((d) => { (d.steps[0] as { use: { contentHash: string } }).use.contentHash = 'f'.repeat(64); });
-    expect(pin[0]).toMatchObject({ stage: 'symbols', pointer: '/steps/0/use' });
+    const pin = issuesOf((d) => { (d.steps[1] as { use: { contentHash: string } }).use.contentHash = 'f'.repeat(64); });
+    expect(pin[0]).toMatchObject({ stage: 'symbols', pointer: '/steps/1/use' });
     const local = issuesOf((d) => { d.outputs.push({ symbol: 'delta_over_L', name: 'local to an option' }); });
     expect(local[0].message).toMatch(/visible after it only if the choice gives it/);
     const otherwise = issuesOf((d) => { delete (d.steps[4] as { options: { when?: string }[] }).options[0].when; });

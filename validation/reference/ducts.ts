@@ -141,7 +141,11 @@ function channel(n: number, s: Float64Array, lower: 'fixed' | 'insulated', upper
  * Parallel plates (gap 2a, D_h = 4a), both walls or one wall heated: f·Re, Nu_H (uniform flux) and Nu_T
  * (uniform temperature, by inverse iteration), finite differences extrapolated from n and 2n cells.
  */
+const platesCache = new Map<string, { fRe: number; nuH: number; nuT: number }>();
 export function parallelPlatesFd(heated: 'both' | 'one', n = 400): { fRe: number; nuH: number; nuT: number } {
+  const key = `${heated}:${n}`;
+  const hit = platesCache.get(key);
+  if (hit) return hit;
   const solve = (m: number) => {
     // The whole gap 0…1 (so D_h = 2 in these units); walls at both ends for the flow.
     const u = channel(m, new Float64Array(m).fill(-1), 'fixed', 'fixed');
@@ -176,7 +180,9 @@ export function parallelPlatesFd(heated: 'both' | 'one', n = 400): { fRe: number
   const c = solve(n);
   const f = solve(2 * n);
   const ex = (x: number, y: number) => (4 * y - x) / 3;
-  return { fRe: ex(c.fRe, f.fRe), nuH: ex(c.nuH, f.nuH), nuT: ex(c.nuT, f.nuT) };
+  const result = { fRe: ex(c.fRe, f.fRe), nuH: ex(c.nuH, f.nuH), nuT: ex(c.nuT, f.nuT) };
+  platesCache.set(key, result);
+  return result;
 }
 
 /**

@@ -16,7 +16,7 @@ type Point = Record<string, number | string>;
 
 interface Planned {
   slug: string;
-  kind: 'cross-check' | 'independent-solution' | 'standard-formulation' | 'limit' | 'memory';
+  kind: 'cross-check' | 'independent-solution' | 'standard-formulation' | 'limit' | 'memory' | 'common-practice';
   points: Point[];
   /** cross-check: the other correlation, and fixed values for its inputs the case does not have. */
   partner?: string;
@@ -59,6 +59,10 @@ const lim = (slug: string, reference: string, tolerance: number, points: Point[]
 const mem = (slug: string, values: Record<string, number>, tolerance: number, points: Point[], citation: string, scale?: (i: Record<string, number>) => number): Planned => ({
   slug, kind: 'memory', values, scale, tolerance, points, citation, why: scale ? 'the correlation’s stated accuracy' : 'rounding of the recalled constant and of the definition’s coefficient',
 });
+/** A fact of the trade, without a source: the value a practitioner expects, with the loose tolerance such a fact deserves. */
+const cp = (slug: string, reference: string, tolerance: number, points: Point[], citation: string, why: string): Planned => ({
+  slug, kind: 'common-practice', reference, tolerance, points, citation, why,
+});
 const std = (slug: string, python: Record<string, string>, tolerance: number, points: Point[], why: string): Planned => ({
   slug, kind: 'standard-formulation', python, tolerance, points, citation: '', why,
 });
@@ -84,6 +88,27 @@ const HX_GRID = 'Cross-flow on a 200 × 200 grid of cells, each solved exactly f
 const HX_WHY = 'the closed form is the exact solution of the model solved numerically: numerical error about 1e-6, tolerance 1e-4';
 const HX_CR0 = 'As C_r → 0 every arrangement tends to one stream heated (or cooled) by a stream at constant temperature: ε = 1 − e^(−NTU), integrated numerically';
 const HX_CR0_WHY = 'exact at C_r = 0; numerical error about 1e-6';
+const DUCT = 'Laminar fully developed duct flow: the Poisson equations by finite differences (Richardson-extrapolated), friction by the exact series — validation/reference/ducts.ts';
+const ENT = 'Graetz–Lévêque problem marched by Crank–Nicolson on a grid clustered at the wall, Nusselt numbers from energy balances — validation/reference/entrance.ts';
+const BB = 'Planck’s law integrated by Simpson’s rule — validation/reference/radiation.ts';
+const VF = 'The view-factor double-area integral by product midpoint rules — validation/reference/radiation.ts';
+const VF_WHY = 'the closed form is the exact integral: quadrature error below 1e-3 at this spacing';
+const SG = 'Laminar film condensation with inertia and energy convection, the similarity solution of Sparrow & Gregg (1959) by shooting — validation/reference/films.ts';
+const TUBE = 'Nusselt’s film equation around each tube of the column integrated by RK4, the condensate of each tube falling onto the next — validation/reference/films.ts';
+const WATER_1ATM = { rho_l: 961.9, rho_v: 0.5978, mu_l: 2.97e-4, k_l: 0.677, cp_l: 4209, h_fg: 2.257e6, T_sat: 373.15 };
+const ETHANOL_1ATM = { rho_l: 736, rho_v: 1.44, mu_l: 4.3e-4, k_l: 0.15, cp_l: 2950, h_fg: 8.46e5, T_sat: 351.4 };
+const nusseltGroup = (i: Record<string, number>, len: number, hfg = i.h_fg) => ((9.80665 * i.rho_l * (i.rho_l - i.rho_v) * i.k_l ** 3 * hfg) / (i.mu_l * (i.T_sat - i.T_s) * len)) ** 0.25;
+const IAPWS_SAT = (T: number) => ({ rho_l: `IAPWS95(T=${T}, x=0).rho`, rho_v: `IAPWS95(T=${T}, x=1).rho`, h_fg: `(IAPWS95(T=${T}, x=1).h - IAPWS95(T=${T}, x=0).h) * 1000`, sigma: `IAPWS95(T=${T}, x=0).sigma` });
+const WATER_100C = { rho_l: 958.35, rho_v: 0.5977, mu_l: 2.817e-4, cp_l: 4216, h_fg: 2.2565e6, sigma: 0.05891, Pr_l: 1.753 };
+const chfGroup = (i: Record<string, number>) => i.h_fg * i.rho_v * ((i.sigma * 9.80665 * (i.rho_l - i.rho_v)) / (i.rho_v * i.rho_v)) ** 0.25;
+const grimison = (c1: number, m: number) => (i: Record<string, number>) => 1.13 * c1 * i.Re_Dmax ** m * Math.cbrt(i.Pr);
+const GRIM = (geom: string, c1: number, m: number) => `Grimison (1937) Trans. ASME 59:583, air over ${geom} banks of 10 rows or more: Nu = 1.13 C₁ Re^m Pr^(1/3) with C₁ = ${c1}, m = ${m} (Incropera et al. 2007 Table 7.5; from memory)`;
+const WATER_RULE = 'Saturated water at 1 atm boiling at 10⁵ W/m² on a clean metal surface runs about 10 K above saturation (common practice)';
+const WATER_RULE_WHY = 'a rule of thumb for the boiling curve: ±50 %';
+const OSEEN = 'Low Péclet number limit of a cylinder in cross-flow (Oseen flow): the field of a moving line source gives Nu = 2/(ln(8/Pe) − γ), Pe = Re Pr (derived here from the modified Bessel function K₀; Cole & Roshko 1954)';
+const OSEEN_WHY = 'the correlation’s stated 20 % with 15 % for the next term of the expansion at Pe ≈ 0.3';
+/** Saturated water at T from IAPWS-95 (python3-iapws): liquid properties and latent heat for condensation points. */
+const WATER_SAT = (T: number) => ({ rho_l: `IAPWS95(T=${T}, x=0).rho`, rho_v: `IAPWS95(T=${T}, x=1).rho`, mu_l: `IAPWS95(T=${T}, x=0).mu`, k_l: `IAPWS95(T=${T}, x=0).k`, cp_l: `IAPWS95(T=${T}, x=0).cp * 1000`, h_fg: `(IAPWS95(T=${T}, x=1).h - IAPWS95(T=${T}, x=0).h) * 1000`, T_sat: T });
 const AIR = 'Air(T={T}, P={P})';
 const AIR_CITE = 'Lemmon et al. (2000) equation of state, Lemmon & Jacobsen (2004) transport, computed by python3-iapws';
 
@@ -255,7 +280,7 @@ export const PLAN: Planned[] = [
   num('hx-effectiveness-shell-and-tube-one-shell-pass', 'hx-ode-one-shell-tube-min', 1e-4, [{ NTU: 1.5, C_r: 0.6 }], HX_ODE + ' (1-2: the tube fluid is C_min)', HX_WHY),
   lim('hx-effectiveness-shell-and-tube-one-shell-pass', 'hx-ode-single-stream', 1e-4, [{ NTU: 2, C_r: 0 }], HX_CR0, HX_CR0_WHY),
   ind('hx-effectiveness-crossflow-both-unmixed', 'hx-series-crossflow-unmixed', 0, [{ NTU: 0.3, C_r: 0.2 }, { NTU: 2, C_r: 0.6 }], 'Mason (1955) exact series for cross-flow with both streams unmixed (Baclic 1990 form), summed to 1e-16 — validation/reference/exchangers.ts', 'the approximation’s stated 4 % (the series is exact)'),
-  ind('hx-effectiveness-crossflow-both-unmixed', 'hx-grid-crossflow-unmixed', 1e-4, [{ NTU: 6, C_r: 1 }], HX_GRID, 'the approximation’s stated 4 % with the grid’s error'),
+  ind('hx-effectiveness-crossflow-both-unmixed', 'hx-grid-crossflow-unmixed', 1e-4, [{ NTU: 6, C_r: 1 }, { NTU: 1, C_r: 0.4 }], HX_GRID, 'the approximation’s stated 4 % with the grid’s error'),
   lim('hx-effectiveness-crossflow-both-unmixed', 'hx-ode-single-stream', 1e-4, [{ NTU: 1.5, C_r: 1e-6 }], HX_CR0, 'C_r = 1e-6 differs from the limit by about 1e-6'),
   num('hx-effectiveness-crossflow-cmax-mixed', 'hx-grid-crossflow-cmax-mixed', 1e-4, [{ NTU: 0.5, C_r: 0.25 }, { NTU: 2, C_r: 0.6 }, { NTU: 4, C_r: 1 }], HX_GRID + ' (C_max mixed across each row)', HX_WHY),
   lim('hx-effectiveness-crossflow-cmax-mixed', 'hx-ode-single-stream', 1e-4, [{ NTU: 1.5, C_r: 1e-6 }], HX_CR0, 'C_r = 1e-6 differs from the limit by about 1e-6'),
@@ -269,6 +294,139 @@ export const PLAN: Planned[] = [
   lim('hx-log-mean-temperature-difference', 'hx-limit-arithmetic-mean', 1e-4, [{ dT_1: 20, dT_2: 20.2 }], 'Equal terminal differences: the difference is uniform and the mean is the arithmetic one', 'a 1 % difference between the ends moves the log mean 8e-6 below the arithmetic mean'),
   num('hx-ntu-counterflow', 'hx-ode-ntu-counterflow', 1e-4, [{ eps: 0.3, C_r: 0.2 }, { eps: 0.6, C_r: 0.7 }, { eps: 0.8, C_r: 0.95 }], HX_ODE + ' (the NTU that gives ε found by bisection)', HX_WHY),
   lim('hx-ntu-counterflow', 'hx-limit-small-eps', 2e-3, [{ eps: 0.001, C_r: 0.5 }], 'A small duty needs a proportionally small exchanger: NTU → ε as ε → 0', 'the next term is ε(1 + C_r)/2 = 7.5e-4 at ε = 0.001'),
+
+  // ——— non-circular ducts (validation/reference/ducts.ts) ———
+  ind('duct-rectangular-laminar-developed', 'duct-fd-rectangular', 1e-4, [{ aspect: 0.15 }, { aspect: 0.5 }, { aspect: 0.8 }, { aspect: 1 }], DUCT, 'the fits’ stated accuracy (0.1 % for f·Re and Nu_H, 0.5 % for Nu_T) with the numerical error'),
+  lim('duct-rectangular-laminar-developed', 'duct-limit-parallel-plates', 1e-3, [{ aspect: 1e-4 }], 'A rectangle of vanishing aspect ratio is a channel between parallel plates (f·Re = 96, Nu_H = 140/17, Nu_T = 7.541), solved by finite differences', 'the fits approach the plate values linearly in the aspect ratio: 3e-4 at 10⁻⁴'),
+  ind('duct-parallel-plates-laminar-developed', 'duct-fd-parallel-plates', 1e-4, [{ Re_Dh: 100 }, { Re_Dh: 1000 }, { Re_Dh: 2000 }], DUCT + ' (one dimension, 400 and 800 cells extrapolated)', 'the four-digit rounding (0.1 %) with the numerical error'),
+  mem('duct-parallel-plates-laminar-developed', { Nu_T: 7.541, Nu_H: 8.235, Nu_T_one: 4.861, Nu_H_one: 5.385 }, 1e-3, [{ Re_Dh: 500 }], 'Shah & London (1978) ch. VI, tabulated fully developed Nusselt numbers for parallel plates (from memory)', () => 1),
+  ind('duct-annulus-laminar-developed', 'duct-fd-annulus', 1e-4, [{ r_ratio: 0.25 }, { r_ratio: 0.5 }, { r_ratio: 0.7 }, { r_ratio: 0.9 }], DUCT + ' (radial, 400 and 800 cells extrapolated)', 'the table’s stated interpolation accuracy with the numerical error'),
+  lim('duct-annulus-laminar-developed', 'duct-limit-narrow-annulus', 1e-3, [{ r_ratio: 0.999 }], 'A narrow annulus (r_i/r_o → 1) is a channel between plates with one wall heated and the other insulated: Nu = 70/13, f·Re = 96, by finite differences', 'the gap is 0.1 % of the radius'),
+
+  // ——— developing laminar tube flow (validation/reference/entrance.ts) ———
+  ind('pipe-laminar-apparent-friction-entrance', 'entrance-marching-apparent-friction', 0.02, [{ Re_D: 2000, x_over_D: 0.4 }, { Re_D: 1000, x_over_D: 5 }, { Re_D: 500, x_over_D: 25 }], 'Boundary-layer (parabolised) equations of the developing flow marched from a uniform inlet (Bodoia & Osterle 1961 scheme) — validation/reference/entrance.ts', 'Shah’s stated 2.4 % with 2 % for the boundary-layer model near the inlet (from memory)'),
+  lim('pipe-laminar-apparent-friction-entrance', 'entrance-limit-developed-friction', 1e-3, [{ Re_D: 100, x_over_D: 5000 }], 'Far from the inlet the pressure gradient is Hagen–Poiseuille’s and the entrance excess spreads over x: f_app·Re → 64', 'the excess 1.25/(4x⁺) is 0.04 % at x⁺ = 50'),
+  ind('pipe-laminar-thermal-entry-local-uwt', 'entrance-marching-local-uwt', 0.005, [{ Re_D: 2000, Pr: 10, x_over_D: 2 }, { Re_D: 1000, Pr: 5, x_over_D: 25 }, { Re_D: 500, Pr: 0.7, x_over_D: 10 }, { Re_D: 100, Pr: 7, x_over_D: 40 }], ENT, 'Shah’s stated 3 % with 0.5 % for the marching solution'),
+  lim('pipe-laminar-thermal-entry-local-uwt', 'developed-local-uwt', 1e-3, [{ Re_D: 100, Pr: 1, x_over_D: 100 }], 'Far from the start of heating the profile is developed: Nu_x → 3.6568, the least Graetz eigenvalue found by shooting', 'the fit gives 3.657 + 7e-10 at x* = 1'),
+  ind('pipe-laminar-thermal-entry-local-uhf', 'entrance-marching-local-uhf', 0.005, [{ Re_D: 2000, Pr: 10, x_over_D: 2 }, { Re_D: 1000, Pr: 5, x_over_D: 25 }, { Re_D: 500, Pr: 0.7, x_over_D: 10 }, { Re_D: 100, Pr: 7, x_over_D: 40 }], ENT, 'Shah’s stated 3 % with 0.5 % for the marching solution'),
+  lim('pipe-laminar-thermal-entry-local-uhf', 'developed-local-uhf', 1e-3, [{ Re_D: 100, Pr: 1, x_over_D: 100 }], 'Far from the start of heating the profile is developed: Nu_x → 48/11, found by finite differences', 'the fit gives 4.364 against 4.3636'),
+  xc('pipe-transition-gnielinski', 'pipe-laminar-entry-hausen', [{ Re_D: 2300, Pr: 5, L_over_D: 100 }]),
+  xc('pipe-transition-gnielinski', 'pipe-turbulent-gnielinski', [{ Re_D: 10000, Pr: 3, L_over_D: 10000 }, { Re_D: 10000, Pr: 0.7, L_over_D: 5000 }]),
+  ind('pipe-transition-gnielinski', 'entrance-marching-mean-uwt', 0.05, [{ Re_D: 2300, Pr: 1000, L_over_D: 1000 }], ENT + ' (mean over the length, thermal development only)', 'the interpolation’s stated 15 % with 5 % for leaving out the velocity development (Pr = 1000)'),
+
+  // ——— radiation (validation/reference/radiation.ts) ———
+  num('blackbody-fraction', 'blackbody-quadrature', 1e-4, [{ lambda: 0.5, T: 5800 }, { lambda: 3, T: 1000 }, { lambda: 10, T: 300 }, { lambda: 1, T: 1500 }], BB, 'Simpson’s rule leaves about 1e-6; tolerance 1e-4'),
+  mem('blackbody-fraction', { F: 1 }, 1e-4, [{ lambda: 1, T: 5000 }, { lambda: 2, T: 5000 }], 'Incropera et al. (2007) Table 12.1 of blackbody radiation functions: 0.633747 at λT = 5000 and 0.914199 at 10 000 μm·K (from memory)', (i) => ({ 5000: 0.633747, 10000: 0.914199 } as Record<number, number>)[i.lambda * i.T]),
+  lim('blackbody-fraction', 'blackbody-limit-whole-spectrum', 1e-6, [{ lambda: 1000, T: 3000 }], 'The whole spectrum: F(0 → λT) → 1 as λT → ∞', 'F = 1 − 4e-8 at λT = 3×10⁶ μm·K'),
+  num('blackbody-band-fraction', 'blackbody-band-quadrature', 1e-4, [{ lambda_1: 0.4, lambda_2: 0.7, T: 5800 }, { lambda_1: 2, lambda_2: 5, T: 1000 }, { lambda_1: 8, lambda_2: 14, T: 300 }], BB, 'Simpson’s rule leaves about 1e-6; tolerance 1e-4'),
+  lim('blackbody-band-fraction', 'blackbody-limit-whole-spectrum', 1e-6, [{ lambda_1: 0.01, lambda_2: 1000, T: 3000 }], 'A band covering the whole spectrum holds all the emission: F → 1', 'the tails hold less than 1e-7'),
+  num('view-factor-coaxial-parallel-disks', 'vf-numeric-disks', 1e-3, [{ r_1: 0.5, r_2: 1, L: 1 }, { r_1: 1, r_2: 0.3, L: 0.5 }, { r_1: 0.2, r_2: 0.2, L: 1 }], VF, VF_WHY),
+  lim('view-factor-coaxial-parallel-disks', 'vf-limit-point-to-disk', 1e-3, [{ r_1: 1e-4, r_2: 0.5, L: 1 }], 'Seen from a point on the axis (r₁ → 0) a disk subtends F = r₂²/(L² + r₂²) exactly', 'a disk of radius 10⁻⁴ L departs from a point by 1e-8'),
+  num('view-factor-aligned-parallel-rectangles', 'vf-numeric-aligned-rectangles', 2e-3, [{ X: 1, Y: 1, L: 1 }, { X: 2, Y: 0.5, L: 1 }, { X: 1, Y: 3, L: 2 }], VF, VF_WHY),
+  lim('view-factor-aligned-parallel-rectangles', 'vf-limit-far-rectangles', 1e-3, [{ X: 1, Y: 1, L: 100 }], 'Rectangles far apart see each other as small areas: F → X Y/(π L²)', 'the next term is O((X/L)²) = 1e-4'),
+  num('view-factor-perpendicular-rectangles-common-edge', 'vf-numeric-perpendicular-rectangles', 1e-3, [{ X: 1, Y: 1, Z: 1 }, { X: 2, Y: 1, Z: 0.5 }, { X: 0.5, Y: 2, Z: 1 }], VF + ' (graded towards the shared edge, where the kernel is singular)', 'the graded rule leaves about 1e-5; tolerance 1e-3'),
+  xv('view-factor-perpendicular-rectangles-common-edge', 'view-factor-aligned-parallel-rectangles', 'cube-summation', [{ X: 0.3, Y: 0.3, Z: 0.3 }]),
+
+  // ——— horizontal plates and layers: partners, the Rayleigh–Bénard wall layer, recalled measurements ———
+  xc('horizontal-plate-hot-surface-up', 'horizontal-plate-hot-surface-up-raithby-hollands', [{ Ra_L: 1e5, Pr: 0.71 }, { Ra_L: 1e9, Pr: 0.71 }]),
+  xv('horizontal-plate-hot-surface-up', 'enclosure-horizontal-globe-dropkin', 'rayleigh-benard-wall', [{ Ra_L: 1e9, Pr: 0.71 }]),
+  mem('horizontal-plate-hot-surface-up', { Nu_L: 0.59 }, 0.23, [{ Ra_L: 1e4, Pr: 2.5 }], 'Goldstein, Sparrow & Jones (1973) Int. J. Heat Mass Transfer 16:1025, naphthalene sublimation from horizontal plates (Sc ≈ 2.5): Sh = 0.59 Ra^(1/4) for 200 < Ra < 10⁴ with L = A/P (from memory); tolerance √(20 %² + 10 %²) for this correlation and the data’s scatter', (i) => i.Ra_L ** 0.25),
+  xc('horizontal-plate-hot-surface-up-raithby-hollands', 'horizontal-plate-hot-surface-up', [{ Ra_L: 1e5, Pr: 0.71 }, { Ra_L: 1e9, Pr: 0.71 }]),
+  // At Pr = 5 the wall-layer relation with Globe & Dropkin's water data gives 28 % more than Raithby & Hollands' turbulent term; in air 17 %.
+  xv('horizontal-plate-hot-surface-up-raithby-hollands', 'enclosure-horizontal-globe-dropkin', 'rayleigh-benard-wall', [{ Ra_L: 3e9, Pr: 0.71 }]),
+  mem('horizontal-plate-hot-surface-up-raithby-hollands', { Nu_L: 0.59 }, 0.15, [{ Ra_L: 1e3, Pr: 2.5 }], 'Goldstein, Sparrow & Jones (1973) Int. J. Heat Mass Transfer 16:1025, naphthalene sublimation from horizontal plates (Sc ≈ 2.5): Sh = 0.59 Ra^(1/4) for 200 < Ra < 10⁴ with L = A/P (from memory); tolerance √(10 %² + 10 %²)', (i) => i.Ra_L ** 0.25),
+  xc('horizontal-plate-hot-surface-down', 'horizontal-plate-hot-surface-down-raithby-hollands', [{ Ra_L: 1e6, Pr: 0.71 }, { Ra_L: 1e8, Pr: 7 }]),
+  mem('horizontal-plate-hot-surface-down', { Nu_L: 0.27 }, 0.35, [{ Ra_L: 1e6, Pr: 0.71 }], 'McAdams (1954) Heat Transmission, 3rd ed.: Nu = 0.27 Ra^(1/4) for a heated plate facing down, 3×10⁵ < Ra < 3×10¹⁰ (from memory); tolerance √(25 %² + 25 %²) for the two correlations’ scatter', (i) => i.Ra_L ** 0.25),
+  xc('horizontal-plate-hot-surface-down-raithby-hollands', 'horizontal-plate-hot-surface-down', [{ Ra_L: 1e6, Pr: 0.71 }, { Ra_L: 1e8, Pr: 7 }]),
+  mem('horizontal-plate-hot-surface-down-raithby-hollands', { Nu_L: 0.27 }, 0.27, [{ Ra_L: 1e6, Pr: 0.71 }], 'McAdams (1954) Heat Transmission, 3rd ed.: Nu = 0.27 Ra^(1/4) for a heated plate facing down, 3×10⁵ < Ra < 3×10¹⁰ (from memory); tolerance √(10 %² + 25 %²)', (i) => i.Ra_L ** 0.25),
+  xc('enclosure-horizontal-globe-dropkin', 'enclosure-horizontal-hollands', [{ Ra_L: 1e6, Pr: 0.71 }, { Ra_L: 5e7, Pr: 0.71 }]),
+  // Niemela et al.'s cell was a cylinder of aspect ratio ½, not a wide layer: at Ra = 10⁷ it lies 20–26 % above both layer correlations, at 10⁹ within 10 %.
+  mem('enclosure-horizontal-globe-dropkin', { Nu_L: 0.124 }, 0.23, [{ Ra_L: 1e9, Pr: 0.7 }], 'Niemela, Skrbek, Sreenivasan & Donnelly (2000) Nature 404:837, turbulent convection in cryogenic helium (Pr ≈ 0.7) in a cell of aspect ratio ½: Nu = 0.124 Ra^0.309 over 10⁶–10¹⁷ (from memory); tolerance √(20 %² + 10 %²)', (i) => i.Ra_L ** 0.309),
+  xv('enclosure-horizontal-globe-dropkin', 'horizontal-plate-hot-surface-up', 'rayleigh-benard-layer', [{ Ra_L: 1e9, Pr: 0.71 }]),
+  xc('enclosure-horizontal-hollands', 'enclosure-horizontal-globe-dropkin', [{ Ra_L: 1e6 }, { Ra_L: 5e7 }], { Pr: 0.71 }),
+  lim('enclosure-horizontal-hollands', 'conduction-layer', 1e-9, [{ Ra_L: 1500 }], 'Below the onset of cells at Ra = 1708 (Pellew & Southwell 1940, linear stability) a horizontal layer heated from below only conducts: Nu = 1', 'exact: pure conduction'),
+  // The turbulent branch of the upward-facing plate carries the wall layers of a Rayleigh–Bénard cell (mappings.ts).
+  xv('enclosure-horizontal-hollands', 'horizontal-plate-hot-surface-up', 'rayleigh-benard-layer', [{ Ra_L: 5e7 }], { Pr: 0.71 }),
+  xc('enclosure-inclined-hollands', 'enclosure-horizontal-hollands', [{ Ra_L: 1e4, theta_deg: 0, H_over_L: 20 }]),
+  xv('enclosure-inclined-hollands', 'enclosure-horizontal-hollands', 'gravity-normal-component', [{ Ra_L: 5e4, theta_deg: 15, H_over_L: 20 }, { Ra_L: 2e4, theta_deg: 30, H_over_L: 30 }, { Ra_L: 9e4, theta_deg: 50, H_over_L: 40 }]),
+  lim('enclosure-inclined-hollands', 'conduction-layer', 1e-9, [{ Ra_L: 2000, theta_deg: 45, H_over_L: 20 }], 'Below the onset of cells (Ra cos θ < 1708) a layer heated from below only conducts: Nu = 1', 'exact: pure conduction'),
+  ind('inclined-plate-churchill-chu-laminar', 'ostrach-inclined-average', 0.02, [{ Ra_L: 1e5, Pr: 0.71, theta_deg: 30 }, { Ra_L: 1e7, Pr: 0.9, theta_deg: 45 }, { Ra_L: 3e8, Pr: 0.71, theta_deg: 60 }], 'Ostrach (1953) similarity solution of the laminar layer with the component g cos θ along the plate, solved by shooting — validation/reference/similarity.ts', 'the correlation’s stated 10 % with 2 % for the boundary-layer model'),
+  xc('inclined-plate-churchill-chu-laminar', 'vertical-plate-churchill-chu-laminar', [{ Ra_L: 1e6, Pr: 0.71, theta_deg: 0 }]),
+
+  // ——— film condensation (validation/reference/films.ts) ———
+  num('condensation-vertical-plate-nusselt', 'sparrow-gregg-plate', 0.01, [{ ...WATER_1ATM, T_s: 363.15, L: 0.03 }, { ...WATER_1ATM, T_s: 358.15, L: 0.01 }, { ...ETHANOL_1ATM, T_s: 341.4, L: 0.1 }, { ...WATER_SAT(303.15), T_s: 298.15, L: 0.02 }], SG, 'Nusselt’s film with Rohsenow’s latent-heat correction against the solution with inertia and convection: they differ by under 1 % for Pr ≥ 1 and Ja ≤ 0.1'),
+  mem('condensation-vertical-plate-nusselt', { h: 0.943 }, 1e-3, [{ ...WATER_1ATM, T_s: 372.65, L: 0.3 }], 'Nusselt (1916): h = 0.943 [g ρ_l (ρ_l − ρ_v) k³ h_fg/(μ ΔT L)]^(1/4) with the plain latent heat (from memory); at ΔT = 0.5 K the correction is 0.02 %', (i) => nusseltGroup(i, i.L)),
+  num('condensation-horizontal-tubes-nusselt', 'nusselt-tube-column-ode', 3e-3, [{ ...WATER_1ATM, T_s: 363.15, D: 0.02, N: 1 }, { ...WATER_1ATM, T_s: 358.15, D: 0.025, N: 4 }, { ...ETHANOL_1ATM, T_s: 336.4, D: 0.016, N: 10 }, { ...WATER_SAT(303.15), T_s: 298.15, D: 0.019, N: 6 }], TUBE, 'the same film model integrated numerically: 0.729 is 0.14 % above the exact 0.7280; tolerance 0.3 %'),
+  mem('condensation-horizontal-tubes-nusselt', { h: 0.728 }, 3e-3, [{ ...WATER_1ATM, T_s: 372.65, D: 0.03, N: 1 }], 'Dhir & Lienhard (1971): the coefficient of Nusselt’s horizontal-tube solution is 0.728 (from memory)', (i) => nusseltGroup(i, i.D)),
+
+  // ——— boiling: the three nucleate correlations against each other, the critical heat flux against the hydrodynamic theory’s constants ———
+  xc('boiling-nucleate-rohsenow', 'boiling-nucleate-cooper', [{ q: 1e5, ...WATER_100C, C_sf: 0.013, n: 1 }, { q: 4e5, ...WATER_100C, C_sf: 0.013, n: 1 }], { p_r: 0.004592, M: 0.018015, R_p: 1 }),
+  xc('boiling-nucleate-rohsenow', 'boiling-nucleate-mostinski', [{ q: 2e5, ...WATER_100C, C_sf: 0.013, n: 1 }, { q: 1e4, ...WATER_100C, C_sf: 0.013, n: 1 }], { p_c: 22.064e6, p_r: 0.004592 }),
+  xc('boiling-nucleate-cooper', 'boiling-nucleate-mostinski', [{ q: 1e5, p_r: 0.004592, M: 0.018015, R_p: 1 }, { q: 3e5, p_r: 0.1, M: 0.018015, R_p: 1 }, { q: 5e5, p_r: 0.5, M: 0.018015, R_p: 1 }], { p_c: 22.064e6 }),
+  xc('boiling-nucleate-cooper', 'boiling-nucleate-rohsenow', [{ q: 2e5, p_r: 0.004592, M: 0.018015, R_p: 1 }], { ...WATER_100C, C_sf: 0.013, n: 1 }),
+  xc('boiling-nucleate-mostinski', 'boiling-nucleate-cooper', [{ q: 1e5, p_c: 22.064e6, p_r: 0.004592 }, { q: 3e5, p_c: 22.064e6, p_r: 0.1 }, { q: 5e5, p_c: 22.064e6, p_r: 0.5 }], { M: 0.018015, R_p: 1 }),
+  xc('boiling-nucleate-mostinski', 'boiling-nucleate-rohsenow', [{ q: 2e5, p_c: 22.064e6, p_r: 0.004592 }], { ...WATER_100C, C_sf: 0.013, n: 1 }),
+  xc('boiling-critical-heat-flux-zuber', 'boiling-critical-heat-flux-lienhard-dhir', [{ ...IAPWS_SAT(373.124), T: 373.124 }, { ...IAPWS_SAT(453.03), T: 453.03 }]),
+  mem('boiling-critical-heat-flux-zuber', { q_max: 0.16 }, 0.25, [{ ...IAPWS_SAT(373.124), T: 373.124 }], 'Kutateladze (1948): the same hydrodynamic group with K = 0.16 (from memory); tolerance √(20 %² + 15 %²); saturated water at 1 atm from IAPWS-95 (python3-iapws)', chfGroup),
+  xc('boiling-critical-heat-flux-lienhard-dhir', 'boiling-critical-heat-flux-zuber', [{ ...IAPWS_SAT(373.124), T: 373.124 }, { ...IAPWS_SAT(453.03), T: 453.03 }]),
+  mem('boiling-critical-heat-flux-lienhard-dhir', { q_max: 0.16 }, 0.2, [{ ...IAPWS_SAT(373.124), T: 373.124 }], 'Kutateladze (1948): the same hydrodynamic group with K = 0.16 (from memory); tolerance √(15 %² + 15 %²); saturated water at 1 atm from IAPWS-95 (python3-iapws)', chfGroup),
+
+  // ——— tube banks: two independent correlations, Grimison's recalled constants, an isolated cylinder's drag ———
+  xc('tube-bank-zukauskas-aligned', 'tube-bank-gnielinski-aligned', [{ Re_Dmax: 5e3, Pr: 0.71, Pr_s: 0.71, N_L: 20 }, { Re_Dmax: 5e4, Pr: 7, Pr_s: 5, N_L: 20 }, { Re_Dmax: 2e4, Pr: 0.71, Pr_s: 0.71, N_L: 4 }], { a: 2, b: 2 }),
+  mem('tube-bank-zukauskas-aligned', { Nu_D: 1 }, 0.2, [{ Re_Dmax: 1e4, Pr: 0.71, Pr_s: 0.71, N_L: 20 }], GRIM('in-line 2 × 2', 0.418, 0.57) + '; tolerance √(15 %² + 10 %²)', grimison(0.418, 0.57)),
+  mem('tube-bank-zukauskas-aligned', { Nu_D: 1 }, 0.2, [{ Re_Dmax: 2e4, Pr: 0.71, Pr_s: 0.71, N_L: 20 }], GRIM('in-line 1.5 × 1.5', 0.367, 0.586) + '; tolerance √(15 %² + 10 %²)', grimison(0.367, 0.586)),
+  xc('tube-bank-zukauskas-staggered', 'tube-bank-gnielinski-staggered', [{ Re_Dmax: 5e3, Pr: 0.71, Pr_s: 0.71, N_L: 20, ST_over_SL: 1 }, { Re_Dmax: 5e4, Pr: 7, Pr_s: 5, N_L: 20, ST_over_SL: 1 }, { Re_Dmax: 2e4, Pr: 0.71, Pr_s: 0.71, N_L: 4, ST_over_SL: 1 }], { a: 2, b: 2 }),
+  mem('tube-bank-zukauskas-staggered', { Nu_D: 1 }, 0.2, [{ Re_Dmax: 1e4, Pr: 0.71, Pr_s: 0.71, N_L: 20, ST_over_SL: 1 }], GRIM('staggered 2 × 2', 0.482, 0.556) + '; tolerance √(15 %² + 10 %²)', grimison(0.482, 0.556)),
+  mem('tube-bank-zukauskas-staggered', { Nu_D: 1 }, 0.2, [{ Re_Dmax: 2e4, Pr: 0.71, Pr_s: 0.71, N_L: 20, ST_over_SL: 1 }], GRIM('staggered 1.5 × 1.5', 0.451, 0.568) + '; tolerance √(15 %² + 10 %²)', grimison(0.451, 0.568)),
+  xc('tube-bank-gnielinski-aligned', 'tube-bank-zukauskas-aligned', [{ Re_Dmax: 5e3, Pr: 0.71, Pr_s: 0.71, a: 2, b: 2, N_L: 20 }, { Re_Dmax: 5e4, Pr: 7, Pr_s: 5, a: 2, b: 2, N_L: 20 }, { Re_Dmax: 2e3, Pr: 100, Pr_s: 70, a: 2, b: 2, N_L: 20 }]),
+  mem('tube-bank-gnielinski-aligned', { Nu_D: 1 }, 0.23, [{ Re_Dmax: 1e4, Pr: 0.71, Pr_s: 0.71, a: 2, b: 2, N_L: 20 }], GRIM('in-line 2 × 2', 0.418, 0.57) + '; tolerance √(20 %² + 10 %²)', grimison(0.418, 0.57)),
+  mem('tube-bank-gnielinski-aligned', { Nu_D: 1 }, 0.23, [{ Re_Dmax: 2e4, Pr: 0.71, Pr_s: 0.71, a: 1.5, b: 1.5, N_L: 20 }], GRIM('in-line 1.5 × 1.5', 0.367, 0.586) + '; tolerance √(20 %² + 10 %²)', grimison(0.367, 0.586)),
+  xc('tube-bank-gnielinski-staggered', 'tube-bank-zukauskas-staggered', [{ Re_Dmax: 5e3, Pr: 0.71, Pr_s: 0.71, a: 2, b: 2, N_L: 20 }, { Re_Dmax: 5e4, Pr: 7, Pr_s: 5, a: 2, b: 2, N_L: 20 }, { Re_Dmax: 2e3, Pr: 100, Pr_s: 70, a: 2, b: 2, N_L: 20 }], { ST_over_SL: 1 }),
+  mem('tube-bank-gnielinski-staggered', { Nu_D: 1 }, 0.23, [{ Re_Dmax: 1e4, Pr: 0.71, Pr_s: 0.71, a: 2, b: 2, N_L: 20 }], GRIM('staggered 2 × 2', 0.482, 0.556) + '; tolerance √(20 %² + 10 %²)', grimison(0.482, 0.556)),
+  mem('tube-bank-gnielinski-staggered', { Nu_D: 1 }, 0.23, [{ Re_Dmax: 2e4, Pr: 0.71, Pr_s: 0.71, a: 1.5, b: 1.5, N_L: 20 }], GRIM('staggered 1.5 × 1.5', 0.451, 0.568) + '; tolerance √(20 %² + 10 %²)', grimison(0.451, 0.568)),
+  xc('tube-bank-pressure-drop-jakob-aligned', 'tube-bank-pressure-drop-gaddis-gnielinski-aligned', [{ Re_Dmax: 5e3, a: 2, b: 2, N_L: 10 }, { Re_Dmax: 2e4, a: 1.5, b: 1.5, N_L: 10 }, { Re_Dmax: 3e4, a: 2.5, b: 1.5, N_L: 12 }]),
+  cp('tube-bank-pressure-drop-jakob-aligned', 'isolated-cylinder-drag-row', 0.3, [{ Re_Dmax: 1e4, a: 3, b: 3, N_L: 10 }], 'Widely spaced tubes drag like isolated cylinders, C_D ≈ 1.2 for 10⁴ < Re < 2×10⁵ (common practice): Eu = C_D ((a − 1)/a)²/a on the narrowest-section velocity', 'wake shielding lowers an in-line row’s drag and blockage raises it: ±30 %'),
+  xc('tube-bank-pressure-drop-gaddis-gnielinski-aligned', 'tube-bank-pressure-drop-jakob-aligned', [{ Re_Dmax: 5e3, a: 2, b: 2, N_L: 10 }, { Re_Dmax: 2e4, a: 1.5, b: 1.5, N_L: 10 }, { Re_Dmax: 3e4, a: 2.5, b: 1.5, N_L: 12 }]),
+  cp('tube-bank-pressure-drop-gaddis-gnielinski-aligned', 'isolated-cylinder-drag-row', 0.3, [{ Re_Dmax: 1e4, a: 3, b: 3, N_L: 10 }], 'Widely spaced tubes drag like isolated cylinders, C_D ≈ 1.2 for 10⁴ < Re < 2×10⁵ (common practice): Eu = C_D ((a − 1)/a)²/a on the narrowest-section velocity', 'wake shielding lowers an in-line row’s drag and blockage raises it: ±30 %'),
+
+  // ——— pressure losses ———
+  // The two contraction forms part ways for mild contractions: at β = 0.8 they differ by a factor of three (0.05 against 0.15).
+  xc('minor-loss-sudden-contraction-weisbach', 'minor-loss-sudden-contraction-power-fit', [{ beta: 0.2 }, { beta: 0.35 }, { beta: 0.5 }]),
+  cp('minor-loss-sudden-contraction-weisbach', 'sharp-entrance', 0.3, [{ beta: 0 }], 'A sharp-edged entrance from a large vessel (β = 0) loses about half a velocity head (common practice; measured 0.4–0.5)', 'the scatter of entrance measurements, about ±30 %'),
+  xc('minor-loss-sudden-contraction-power-fit', 'minor-loss-sudden-contraction-weisbach', [{ beta: 0.2 }, { beta: 0.35 }, { beta: 0.5 }]),
+  cp('minor-loss-sudden-contraction-power-fit', 'sharp-entrance', 0.3, [{ beta: 0 }], 'A sharp-edged entrance from a large vessel (β = 0) loses about half a velocity head (common practice; measured 0.4–0.5)', 'the scatter of entrance measurements, about ±30 %'),
+  xc('minor-loss-two-k-hooper', 'minor-loss-three-k-darby', [{ Re: 1e5, D: 0.05, K_1: 800, K_inf: 0.4 }, { Re: 1e6, D: 0.2, K_1: 800, K_inf: 0.4 }, { Re: 1000, D: 0.025, K_1: 800, K_inf: 0.4 }], { K_i: 0.14, K_d: 4 }),
+  lim('minor-loss-two-k-hooper', 'fitting-laminar-limit', 0.01, [{ Re: 1, D: 0.05, K_1: 800, K_inf: 0.4 }], 'In creeping flow the loss is viscous: K → K₁/Re', 'the turbulent part is 0.08 % of K at Re = 1'),
+  xc('minor-loss-three-k-darby', 'minor-loss-two-k-hooper', [{ Re: 1e5, D: 0.05, K_1: 800, K_i: 0.14, K_d: 4 }, { Re: 1e6, D: 0.2, K_1: 800, K_i: 0.14, K_d: 4 }, { Re: 1000, D: 0.025, K_1: 800, K_i: 0.14, K_d: 4 }], { K_inf: 0.4 }),
+  lim('minor-loss-three-k-darby', 'fitting-laminar-limit', 0.01, [{ Re: 1, D: 0.05, K_1: 800, K_i: 0.14, K_d: 4 }], 'In creeping flow the loss is viscous: K → K₁/Re', 'the turbulent part is 0.08 % of K at Re = 1'),
+
+  // ——— further exchangers, view factors, radiation exchange, fin effectiveness, wavy condensate films ———
+  num('hx-effectiveness-shell-and-tube-n-shell-passes', 'hx-chain-n-shells', 1e-4, [{ NTU: 2, C_r: 0.5, n: 2 }, { NTU: 4, C_r: 1, n: 3 }, { NTU: 1, C_r: 0.8, n: 4 }], HX_ODE + ' (each shell by the 1-2 equations, the shells chained numerically by shooting)', HX_WHY),
+  xc('hx-effectiveness-shell-and-tube-n-shell-passes', 'hx-effectiveness-shell-and-tube-one-shell-pass', [{ NTU: 1.5, C_r: 0.6, n: 1 }]),
+  lim('hx-effectiveness-shell-and-tube-n-shell-passes', 'hx-ode-single-stream', 1e-4, [{ NTU: 2, C_r: 0, n: 2 }], HX_CR0, HX_CR0_WHY),
+  num('view-factor-parallel-strips', 'vf-numeric-strips', 1e-3, [{ w: 1, L: 1 }, { w: 2, L: 0.5 }, { w: 0.3, L: 1 }], 'The two-dimensional view-factor integral by a product midpoint rule — validation/reference/radiation.ts', VF_WHY),
+  lim('view-factor-parallel-strips', 'vf-limit-far-strips', 1e-3, [{ w: 0.01, L: 1 }], 'Strips far apart: F → w/(2L)', 'the next term is O((w/L)²) = 1e-4'),
+  num('view-factor-sphere-to-coaxial-disk', 'vf-numeric-sphere-disk', 1e-4, [{ r: 1, h: 1 }, { r: 0.2, h: 1 }, { r: 3, h: 0.5 }], 'The solid angle of the disk seen from the sphere’s centre by the midpoint rule — validation/reference/radiation.ts', 'quadrature error about 1e-6; tolerance 1e-4'),
+  lim('view-factor-sphere-to-coaxial-disk', 'vf-limit-half-space', 1e-3, [{ r: 1e5, h: 1 }], 'A disk large against its distance hides half of what the sphere sees: F → ½', 'F = ½ − 5e-6 at r = 10⁵ h'),
+  num('radiation-exchange-parallel-plates', 'radiation-reflection-series', 1e-4, [{ T_1: 600, T_2: 300, eps_1: 0.8, eps_2: 0.5 }, { T_1: 1000, T_2: 800, eps_1: 0.1, eps_2: 0.3 }, { T_1: 400, T_2: 350, eps_1: 0.05, eps_2: 0.05 }], 'The radiation between two plates followed pass by pass (the multiple-reflection series) — validation/reference/radiation.ts', 'the series is stopped below 1e-6; tolerance 1e-4'),
+  lim('radiation-exchange-parallel-plates', 'radiation-limit-black', 1e-9, [{ T_1: 500, T_2: 300, eps_1: 1, eps_2: 1 }], 'Black plates exchange σ(T₁⁴ − T₂⁴) (Stefan–Boltzmann)', 'exact'),
+  num('fin-effectiveness-straight-rectangular', 'fin-fd-effectiveness-rectangular', 1e-4, [{ h: 40, k: 200, t: 0.003, L: 0.02 }, { h: 150, k: 16, t: 0.004, L: 0.03 }, { h: 25, k: 400, t: 0.001, L: 0.1 }], FIN_TIP, FIN_WHY),
+  lim('fin-effectiveness-straight-rectangular', 'fin-limit-long-effectiveness', 1e-4, [{ h: 50, k: 200, t: 0.002, L: 1 }], 'A long fin (mL → ∞) carries √(h P k A_c) θ_b: ε_f → √(2k/(h t))', 'tanh(mL) = 1 − 10⁻¹⁴ at mL = 15'),
+  xc('condensation-vertical-plate-wavy-kutateladze', 'condensation-vertical-plate-nusselt', [{ ...WATER_1ATM, T_s: 363.15, L: 0.025 }]),
+  mem('condensation-vertical-plate-wavy-kutateladze', { h: 1.2 }, 0.2, [{ ...WATER_1ATM, T_s: 363.15, L: 0.2 }, { ...WATER_1ATM, T_s: 353.15, L: 1 }, { ...WATER_SAT(303.15), T_s: 293.15, L: 1 }], 'McAdams (1954) Heat Transmission: measured coefficients of wavy films exceed Nusselt’s smooth-film value by about 20 % (from memory); Nusselt with h′_fg', (i) => 0.943 * nusseltGroup(i, i.L, i.h_fg * (1 + (0.68 * i.cp_l * (i.T_sat - i.T_s)) / i.h_fg))),
+  cp('boiling-nucleate-rohsenow', 'water-nucleate-rule', 0.5, [{ q: 1e5, ...WATER_100C, C_sf: 0.013, n: 1 }], WATER_RULE, WATER_RULE_WHY),
+  cp('boiling-nucleate-cooper', 'water-nucleate-rule', 0.5, [{ q: 1e5, p_r: 0.004592, M: 0.018015, R_p: 1 }], WATER_RULE, WATER_RULE_WHY),
+  cp('boiling-nucleate-mostinski', 'water-nucleate-rule', 0.5, [{ q: 1e5, p_c: 22.064e6, p_r: 0.004592 }], WATER_RULE, WATER_RULE_WHY),
+
+  // ——— second kinds of evidence for entries that had cross-checks only ———
+  xc('flat-plate-unheated-start-turbulent-local', 'flat-plate-turbulent-local-gas', [{ Re_x: 1e6, Pr: 0.7, xi_over_x: 0 }, { Re_x: 3e6, Pr: 0.9, xi_over_x: 0 }]),
+  xc('flat-plate-unheated-start-turbulent-average', 'flat-plate-turbulent-average-gas', [{ Re_L: 1e6, Pr: 0.7, xi_over_L: 0 }, { Re_L: 3e6, Pr: 0.9, xi_over_L: 0 }]),
+  lim('gas-kinematic-property-pressure-correction', 'pressure-identity', 1e-12, [{ nu_ref: 1.568e-5, alpha_ref: 2.216e-5, p_ref: 101325, p: 101325 }], 'At the reference pressure the correction is the identity (its value at p = p_ref)', 'exact'),
+  lim('cylinder-crossflow-hilpert', 'oseen-cylinder', 0.25, [{ Re_D: 0.4, Pr: 0.71 }], OSEEN, OSEEN_WHY),
+  mem('cylinder-crossflow-zukauskas', { Nu_D: 1 }, 0.23, [{ Re_D: 5, Pr: 0.71, Pr_s: 0.71 }, { Re_D: 30, Pr: 0.71, Pr_s: 0.71 }], 'Collis & Williams (1959) J. Fluid Mech. 6:357, hot wires in air: Nu = 0.24 + 0.56 Re^0.45 for 0.02 < Re < 44 at small overheat (from memory); tolerance √(20 %² + 10 %²)', (i) => 0.24 + 0.56 * i.Re_D ** 0.45),
+  mem('cylinder-crossflow-hilpert', { Nu_D: 1 }, 0.23, [{ Re_D: 10, Pr: 0.71 }], 'Collis & Williams (1959) J. Fluid Mech. 6:357, hot wires in air: Nu = 0.24 + 0.56 Re^0.45 for 0.02 < Re < 44 at small overheat (from memory); tolerance √(20 %² + 10 %²)', (i) => 0.24 + 0.56 * i.Re_D ** 0.45),
+  mem('sphere-forced-whitaker', { Nu_D: 1 }, 0.32, [{ Re_D: 100, Pr: 7, mu_ratio: 1 }, { Re_D: 1000, Pr: 7, mu_ratio: 1 }], 'Vliet & Leppert (1961) J. Heat Transfer 83:163, spheres in water: Nu Pr^(−0.3) (μ_s/μ)^(1/4) = 1.2 + 0.53 Re^0.54 for 1 < Re < 2×10⁵ (from memory); tolerance √(30 %² + 10 %²)', (i) => i.Pr ** 0.3 * (1.2 + 0.53 * i.Re_D ** 0.54)),
+  mem('enclosure-vertical-macgregor-emery', { Nu_L: 1 }, 0.23, [{ Ra_L: 1e6, Pr: 1, H_over_L: 20 }, { Ra_L: 3e6, Pr: 1, H_over_L: 20 }], 'ElSherbiny, Raithby & Hollands (1982) J. Heat Transfer 104:96, tall air cavities: Nu = max[0.0605 Ra^(1/3), (1 + (0.104 Ra^0.293/(1 + (6310/Ra)^1.36))³)^(1/3), 0.242 (Ra/A)^0.272] (from memory); tolerance √(20 %² + 10 %²); at A = 10–30 and Ra ≤ 10⁵ the two part by up to 25 %', (i) => Math.max(0.0605 * Math.cbrt(i.Ra_L), Math.cbrt(1 + ((0.104 * i.Ra_L ** 0.293) / (1 + (6310 / i.Ra_L) ** 1.36)) ** 3), 0.242 * (i.Ra_L / i.H_over_L) ** 0.272)),
 ];
 
 /** The partner's inputs: the case's values for the symbols it shares, then the fixed ones the locator names. */
@@ -376,7 +534,7 @@ export function plannedCases(library: LibraryEntry[], python: (exprs: string[]) 
         rel = p.kind !== 'independent-solution' ? p.tolerance! : p.sameModel ? p.model! : up(Math.max(Math.hypot(def.accuracy?.rel ?? 0, p.model ?? 0), 1e-4));
       }
       if (!Object.keys(expected).length) throw new Error(`evidence plan: ${p.slug} ← ${p.partner ?? p.reference}: no output in common`);
-      const label = `${p.kind === 'cross-check' ? `vs ${p.partner}${p.via ? ` via ${p.via}` : ''}` : p.kind === 'standard-formulation' ? 'standard formulation' : p.kind === 'limit' ? `limit (${p.reference})` : p.kind === 'memory' ? 'recalled published value' : `independent (${p.reference})`} at ${Object.entries(inputs).map(([k, v]) => `${k} = ${fmt(v)}`).join(', ')}`;
+      const label = `${p.kind === 'cross-check' ? `vs ${p.partner}${p.via ? ` via ${p.via}` : ''}` : p.kind === 'standard-formulation' ? 'standard formulation' : p.kind === 'limit' ? `limit (${p.reference})` : p.kind === 'common-practice' ? `common practice (${p.reference})` : p.kind === 'memory' ? 'recalled published value' : `independent (${p.reference})`} at ${Object.entries(inputs).map(([k, v]) => `${k} = ${fmt(v)}`).join(', ')}`;
       const c: CheckCase = {
         label: label.slice(0, 200),
         inputs,
@@ -392,7 +550,7 @@ export function plannedCases(library: LibraryEntry[], python: (exprs: string[]) 
 
 /** Whether a check case in a library file is one the plan writes (and so rewrites): the plan's labels have one shape. */
 export function isPlanned(c: CheckCase): boolean {
-  return /^(vs [a-z0-9-]+( via [a-z0-9-]+)?|standard formulation|limit \([a-z0-9-]+\)|independent \([a-z0-9-]+\)|recalled Blasius constant|recalled published value) at /.test(c.label);
+  return /^(vs [a-z0-9-]+( via [a-z0-9-]+)?|standard formulation|limit \([a-z0-9-]+\)|common practice \([a-z0-9-]+\)|independent \([a-z0-9-]+\)|recalled Blasius constant|recalled published value) at /.test(c.label);
 }
 
 /** Python source that evaluates a JSON list of python3-iapws expressions read from standard input. */

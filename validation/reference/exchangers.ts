@@ -194,3 +194,27 @@ export function counterflowMeanTemperatureDifference(dT1: number, dT2: number, s
   for (let i = 1; i < steps; i++) sum += values[i];
   return sum / steps;
 }
+
+/**
+ * n one-shell-pass exchangers in counterflow series: each shell's effectiveness from the 1-2 ODE model
+ * at NTU/n, the chain composed numerically by shooting on the C_max stream's temperature between shells.
+ */
+export function nShellsEffectiveness(ntu: number, cr: number, n: number): number {
+  const e1 = oneShellTwoTubePassEffectiveness(ntu / n, cr, true, 200);
+  // C_min stream A enters shell 1 at 1; C_max stream B enters shell n at 0 and leaves shell 1 at x.
+  const march = (x: number) => {
+    let ta = 1;
+    let tbOut = x;
+    let tbIn = 0;
+    for (let k = 0; k < n; k++) {
+      tbIn = (tbOut - e1 * cr * ta) / (1 - e1 * cr);
+      ta -= e1 * (ta - tbIn);
+      tbOut = tbIn;
+    }
+    return { ta, tbIn };
+  };
+  const a = march(0);
+  const b = march(1);
+  const x = -a.tbIn / (b.tbIn - a.tbIn);
+  return 1 - march(x).ta;
+}

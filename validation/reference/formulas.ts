@@ -8,6 +8,11 @@
  */
 import { mixingLengthPipe, turbulentLayer, turbulentLayerNusselt } from './turbulence';
 import { annular, pin, solveFin, straightRectangular, straightTriangular, type FinGeometry } from './fins';
+import { annulusFd, parallelPlatesFd, rectangularDuctFd, rectangularDuctFrictionSeries } from './ducts';
+import { apparentFrictionFanning, thermalEntrance } from './entrance';
+import { alignedRectanglesViewFactor, blackbodyFraction, coaxialDisksViewFactor, parallelPlatesExchangeSeries, parallelStripsViewFactor, perpendicularRectanglesViewFactor, sphereToDiskViewFactor } from './radiation';
+import { nusseltTubeColumn, sparrowGreggPlate } from './films';
+import { nShellsEffectiveness } from './exchangers';
 import { counterflowEffectiveness, counterflowMeanTemperatureDifference, crossflowEffectiveness, crossflowUnmixedSeries, oneShellTwoTubeCorrectionFactor, oneShellTwoTubePassEffectiveness, parallelFlowEffectiveness, singleStreamEffectiveness } from './exchangers';
 import { blasius, graetzMeanNusselt, graetzNusseltUWT, levequeUniformFluxCoefficient, ostrachG, simpsonSamples, pohlhausenNusseltCoefficient, powerLawWallNusseltCoefficient, thermalThicknessEta } from './similarity';
 
@@ -311,4 +316,99 @@ Object.assign(REFERENCES, {
   'hx-limit-small-eps': ({ eps }: Inputs) => ({ NTU: eps }),
   // An annulus narrow against its radius is a straight fin of length r_2c − r_1 (corrected length).
   'fin-limit-thin-annulus': ({ h, k, t, r_1, r_2 }: Inputs) => { const m = Math.sqrt((2 * h) / (k * t)); const Lc = r_2 + t / 2 - r_1; return { eta_f: Math.tanh(m * Lc) / (m * Lc) }; },
+});
+
+/**
+ * Non-circular ducts (ducts.ts), developing tube flow (entrance.ts) and radiation (radiation.ts).
+ */
+Object.assign(REFERENCES, {
+  'duct-fd-rectangular': ({ aspect }: Inputs) => { const d = rectangularDuctFd(aspect); return { f_Re: rectangularDuctFrictionSeries(aspect), Nu_T: d.nuT, Nu_H: d.nuH1 }; },
+  'duct-limit-parallel-plates': () => { const p = parallelPlatesFd('both'); return { f_Re: p.fRe, Nu_T: p.nuT, Nu_H: p.nuH }; },
+  'duct-fd-parallel-plates': ({ Re_Dh }: Inputs) => {
+    const both = parallelPlatesFd('both'); const one = parallelPlatesFd('one');
+    return { f: both.fRe / Re_Dh, Nu_T: both.nuT, Nu_H: both.nuH, Nu_T_one: one.nuT, Nu_H_one: one.nuH };
+  },
+  'duct-fd-annulus': ({ r_ratio }: Inputs) => { const a = annulusFd(r_ratio); return { f_Re: a.fRe, Nu_ii: a.nuInner, Nu_oo: a.nuOuter }; },
+  // A narrow annulus (r_i/r_o → 1) is a channel between plates with one wall heated and the other insulated.
+  'duct-limit-narrow-annulus': () => { const p = parallelPlatesFd('one'); return { f_Re: p.fRe, Nu_ii: p.nuH, Nu_oo: p.nuH }; },
+  'entrance-marching-apparent-friction': ({ Re_D, x_over_D }: Inputs) => {
+    const fRe = 4 * apparentFrictionFanning(x_over_D / Re_D);
+    return { f_app_Re: fRe, f_app: fRe / Re_D, K_x: (fRe / Re_D) * x_over_D };
+  },
+  // Far downstream the apparent friction factor tends to the developed 64/Re (the incremental drop spreads over x).
+  'entrance-limit-developed-friction': ({ Re_D }: Inputs) => ({ f_app_Re: 64, f_app: 64 / Re_D }),
+  'entrance-marching-local-uwt': ({ Re_D, Pr, x_over_D }: Inputs) => ({ Nu_x: thermalEntrance('temperature').local(x_over_D / (Re_D * Pr)) }),
+  'entrance-marching-local-uhf': ({ Re_D, Pr, x_over_D }: Inputs) => ({ Nu_x: thermalEntrance('flux').local(x_over_D / (Re_D * Pr)) }),
+  'entrance-marching-mean-uwt': ({ Re_D, Pr, L_over_D }: Inputs) => ({ Nu_D: thermalEntrance('temperature').mean(L_over_D / (Re_D * Pr)) }),
+  'developed-local-uwt': () => ({ Nu_x: graetzNusseltUWT() }),
+  'developed-local-uhf': () => ({ Nu_x: lam().nuUhf }),
+  'blackbody-quadrature': ({ lambda, T }: Inputs) => ({ F: blackbodyFraction(lambda * T) }),
+  'blackbody-band-quadrature': ({ lambda_1, lambda_2, T }: Inputs) => ({ F_band: blackbodyFraction(lambda_2 * T) - blackbodyFraction(lambda_1 * T) }),
+  // The whole spectrum: F → 1 as λT → ∞.
+  'blackbody-limit-whole-spectrum': () => ({ F: 1, F_band: 1 }),
+  'vf-numeric-disks': ({ r_1, r_2, L }: Inputs) => ({ F_12: coaxialDisksViewFactor(r_1, r_2, L) }),
+  // A disk seen from a point on the axis (r₁ → 0): F = r₂²/(L² + r₂²) exactly.
+  'vf-limit-point-to-disk': ({ r_2, L }: Inputs) => ({ F_12: (r_2 * r_2) / (L * L + r_2 * r_2) }),
+  'vf-numeric-aligned-rectangles': ({ X, Y, L }: Inputs) => ({ F_12: alignedRectanglesViewFactor(X, Y, L) }),
+  // Rectangles far apart see each other as points: F → X Y/(π L²).
+  'vf-limit-far-rectangles': ({ X, Y, L }: Inputs) => ({ F_12: (X * Y) / (Math.PI * L * L) }),
+  'vf-numeric-perpendicular-rectangles': ({ X, Y, Z }: Inputs) => ({ F_12: perpendicularRectanglesViewFactor(X, Y, Z) }),
+});
+
+/** References too costly to evaluate at 240 points in the circularity test: the number of points it uses instead. */
+export const CIRCULARITY_POINTS: Record<string, number> = {
+  'duct-fd-rectangular': 24,
+  'vf-numeric-disks': 24,
+  'vf-numeric-aligned-rectangles': 24,
+  'vf-numeric-perpendicular-rectangles': 48,
+  'hx-ode-lmtd-correction': 60,
+};
+
+/** Free convection on inclined plates, film condensation (films.ts), conduction across a quiet layer. */
+const filmFluid = (i: Inputs) => ({ rho_l: i.rho_l, rho_v: i.rho_v, mu_l: i.mu_l, k_l: i.k_l, cp_l: i.cp_l, h_fg: i.h_fg, dT: i.T_sat - i.T_s });
+Object.assign(REFERENCES, {
+  // Ostrach's similarity solution with the component g cos θ along the plate (boundary-layer theory for a tilted plate).
+  'ostrach-inclined-average': ({ Ra_L, Pr, theta_deg }: Inputs) => ({ Nu_L: (4 / 3) * ostrachG(Pr) * ((Ra_L * Math.cos((theta_deg * Math.PI) / 180)) / Pr / 4) ** 0.25 }),
+  'sparrow-gregg-plate': (i: Inputs) => ({ h: sparrowGreggPlate({ ...filmFluid(i), L: i.L }) }),
+  'nusselt-tube-column-ode': (i: Inputs) => {
+    const f = filmFluid(i);
+    return { h: nusseltTubeColumn({ ...f, D: i.D, N: Math.round(i.N), hfg: f.h_fg * (1 + (0.68 * f.cp_l * f.dT) / f.h_fg) }).mean };
+  },
+  // Below the onset of cells the layer only conducts: Nu = 1.
+  'conduction-layer': () => ({ Nu_L: 1 }),
+});
+
+/** Facts of the trade used as loose checks: an isolated cylinder's drag, a sharp pipe entrance, the viscous limit of fittings. */
+Object.assign(REFERENCES, {
+  // Widely spaced in-line tubes each drag like an isolated cylinder, C_D ≈ 1.2 for 10⁴ < Re < 2×10⁵ (common practice):
+  // per row Δp S_T = C_D ρ V∞² D/2 with V∞ = V_max (a − 1)/a, so Eu (on V_max) = C_D ((a − 1)/a)²/a.
+  'isolated-cylinder-drag-row': ({ a, N_L }: Inputs) => { const eu = (1.2 * ((a - 1) / a) ** 2) / a; return { Eu: eu, Eu_total: eu * N_L }; },
+  // A sharp-edged pipe entrance from a large vessel loses about half a velocity head (common practice).
+  'sharp-entrance': () => ({ K: 0.5 }),
+  // In creeping flow a fitting's loss is viscous: K → K₁/Re.
+  'fitting-laminar-limit': ({ Re, K_1 }: Inputs) => ({ K: K_1 / Re }),
+  // Saturated water at 1 atm boiling at 10⁵ W/m² runs about 10 K above saturation (common practice).
+  'water-nucleate-rule': () => ({ dT_e: 10 }),
+  'pressure-identity': ({ nu_ref, alpha_ref }: Inputs) => ({ nu: nu_ref, alpha: alpha_ref }),
+  // A cylinder at small Péclet number is a line source in a uniform stream: T − T∞ = (Q/2πk) e^(Ux/2α) K₀(Ur/2α); at r = D/2,
+  // K₀(z) ≈ −ln(z/2) − γ with z = Pe/4, so Nu = Q/(π k ΔT) = 2/(ln(8/Pe) − γ).
+  'oseen-cylinder': ({ Re_D, Pr }: Inputs) => ({ Nu_D: 2 / (Math.log(8 / (Re_D * Pr)) - 0.5772156649) }),
+});
+
+Object.assign(REFERENCES, {
+  'hx-chain-n-shells': ({ NTU, C_r, n }: Inputs) => ({ eps: nShellsEffectiveness(NTU, C_r, Math.round(n)) }),
+  'vf-numeric-strips': ({ w, L }: Inputs) => ({ F_12: parallelStripsViewFactor(w, L) }),
+  // Strips far apart: F → w/(2L).
+  'vf-limit-far-strips': ({ w, L }: Inputs) => ({ F_12: w / (2 * L) }),
+  'vf-numeric-sphere-disk': ({ r, h }: Inputs) => ({ F_12: sphereToDiskViewFactor(r, h) }),
+  // A disk large against its distance hides half the sky of the sphere: F → ½.
+  'vf-limit-half-space': () => ({ F_12: 0.5 }),
+  'radiation-reflection-series': ({ T_1, T_2, eps_1, eps_2 }: Inputs) => ({ q: parallelPlatesExchangeSeries(T_1, T_2, eps_1, eps_2) }),
+  // Black plates: q = σ (T₁⁴ − T₂⁴).
+  'radiation-limit-black': ({ T_1, T_2 }: Inputs) => ({ q: 5.670374419e-8 * (T_1 ** 4 - T_2 ** 4) }),
+  'fin-fd-effectiveness-rectangular': ({ h, k, t, L }: Inputs) => ({ eps_f: solveFin(straightRectangular(t, L), h, k, 'convective', 200).q / (h * t) }),
+  // A vanishingly short fin is the bare base itself: ε_f → 1.
+  'fin-limit-no-fin': () => ({ eps_f: 1 }),
+  // A long fin carries √(h P k A_c) θ_b, so ε_f → √(2k/(h t)).
+  'fin-limit-long-effectiveness': ({ h, k, t }: Inputs) => ({ eps_f: Math.sqrt((2 * k) / (h * t)) }),
 });

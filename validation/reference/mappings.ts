@@ -36,4 +36,35 @@ export const MAPPINGS: Record<string, Relation> = {
     rel: 0.1,
     relUncertainty: 'a layer under a cold plate and a plate in open surroundings differ in the plumes that leave them; 10 % is a judgement, not a published figure',
   },
+  /**
+   * Summation in a cube: a face sees the opposite face and four adjacent ones and nothing else, so
+   * F(adjacent) = (1 − F(opposite))/4, with every dimension equal.
+   */
+  'cube-summation': {
+    relation: 'the summation rule in a cube (a face sees the opposite face and four adjacent faces: F_adjacent = (1 − F_opposite)/4)',
+    inputs: (i) => ({ X: i.X, Y: i.X, L: i.X }),
+    expected: (o) => ({ F_12: (1 - o.F_12) / 4 }),
+    rel: 1e-9,
+    relUncertainty: 'exact: rounding only',
+  },
+  /**
+   * In a layer tilted θ from the horizontal (heated from below, θ ≤ 60°) the cells are driven by the component of
+   * gravity normal to the plates: Nu(Ra, θ) ≈ Nu_horizontal(Ra cos θ) (Hollands et al. 1976, who add a small
+   * correction to the onset that this relation leaves out).
+   */
+  'gravity-normal-component': {
+    relation: 'the normal component of gravity (Nu of the tilted layer ≈ Nu of a horizontal layer at Ra cos θ)',
+    inputs: (i) => ({ Ra_L: i.Ra_L * Math.cos((i.theta_deg * Math.PI) / 180) }),
+    expected: (o) => ({ Nu_L: o.Nu_L }),
+    rel: 0.1,
+    relUncertainty: 'the relation leaves out the tilt’s delay of the onset of cells and the along-slope flow; 10 % is a judgement',
+  },
+  /** The same relation read the other way: a layer of height L with ΔT across it has Nu_L = ½ Nu of a plate with Ra_L/2. */
+  'rayleigh-benard-layer': {
+    relation: 'the wall layer of Rayleigh–Bénard convection read from the plate (Ra_plate = Ra_L/2, Nu_L = ½ Nu_plate; 1/3-power regime)',
+    inputs: (i) => ({ Ra_L: i.Ra_L / 2 }),
+    expected: (o) => ({ Nu_L: o.Nu_L / 2 }),
+    rel: 0.1,
+    relUncertainty: 'a layer under a cold plate and a plate in open surroundings differ in the plumes that leave them; 10 % is a judgement, not a published figure',
+  },
 };

