@@ -5,6 +5,7 @@ import * as apiTokens from './20261201000300-api-tokens-usage-rate-limits';
 import * as calculations from './20261202000100-templates-projects-calculations';
 import * as throttle from './20261202000200-sign-in-throttle-and-session-versions';
 import * as evidence from './20261202000300-evidence-policy';
+import * as webhooks from './20261203000100-webhooks';
 
 export interface Migration {
   name: string;
@@ -13,4 +14,4 @@ export interface Migration {
 }
 
 /** Every migration in order. Add new files here; the name is what the tracking table records. */
-export const migrations: Migration[] = [usersAndRoles, correlations, apiTokens, calculations, throttle, evidence];
+export const migrations: Migration[] = [usersAndRoles, correlations, apiTokens, calculations, throttle, evidence, webhooks];

@@ -39,6 +39,9 @@ export TEST_PORT="${TEST_PORT:-3100}"
 export TEST_BASE_URL="http://127.0.0.1:$TEST_PORT"
 export NEXTAUTH_URL="$TEST_BASE_URL"
 export RATE_LIMIT_PER_MINUTE="${RATE_LIMIT_PER_MINUTE:-100000}"
+# Webhook retries in a test run: the first retry after 0.3 s, the queue looked at every 0.2 s.
+export WEBHOOK_RETRY_BASE_MS="${WEBHOOK_RETRY_BASE_MS:-300}"
+export WEBHOOK_POLL_MS="${WEBHOOK_POLL_MS:-200}"
 rm -rf "$MAIL_DIR" && mkdir -p "$MAIL_DIR"
 
 PIDS=()

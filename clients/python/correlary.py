@@ -9,6 +9,8 @@ from Python scripts and notebooks. One file, Python >= 3.9, standard library onl
 Results are engineering estimates within the stated validity ranges, to be checked under the
 applicable codes and by a responsible licensed engineer.
 """
+import hashlib
+import hmac
 import json
 import time
 import urllib.error
@@ -16,7 +18,7 @@ import urllib.parse
 import urllib.request
 import warnings
 
-__all__ = ["Client", "CorrelaryError", "CorrelaryRangeWarning"]
+__all__ = ["Client", "CorrelaryError", "CorrelaryRangeWarning", "verify_webhook"]
 __version__ = "1.0.0"
 
 
@@ -181,3 +183,30 @@ class Client:
             if page * page_size >= answer["total"]:
                 return
             page += 1
+
+
+def verify_webhook(secret, headers, body, tolerance=300, now=None):
+    """Check a webhook delivery from Correlary; returns the parsed event, or raises ValueError.
+
+    `headers` is a mapping of the request headers (any case), `body` the raw request body (bytes or str).
+    The signature is HMAC-SHA-256 of "<timestamp>.<body>" with the endpoint's secret; a timestamp more than
+    `tolerance` seconds from now is refused (a captured request replayed later). Also remember the
+    Correlary-Webhook-Id values you processed and ignore repeats.
+
+    >>> event = verify_webhook(secret, request.headers, request.get_data())
+    >>> event["event"], event["data"]["slug"]
+    ('version.withdrawn', 'pipe-turbulent-gnielinski')
+    """
+    h = {k.lower(): v for k, v in dict(headers).items()}
+    raw = body if isinstance(body, bytes) else body.encode("utf-8")
+    try:
+        timestamp = int(h["correlary-webhook-timestamp"])
+        signature = h["correlary-webhook-signature"]
+    except (KeyError, ValueError):
+        raise ValueError("not a Correlary webhook: timestamp or signature header missing")
+    if abs((time.time() if now is None else now) - timestamp) > tolerance:
+        raise ValueError("stale webhook: the timestamp is more than %d s away" % tolerance)
+    expected = "v1=" + hmac.new(secret.encode("utf-8"), str(timestamp).encode("ascii") + b"." + raw, hashlib.sha256).hexdigest()
+    if not hmac.compare_digest(expected, signature):
+        raise ValueError("bad webhook signature")
+    return json.loads(raw.decode("utf-8"))

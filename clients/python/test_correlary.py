@@ -7,7 +7,11 @@ import threading
 import unittest
 import warnings
 
-from correlary import Client, CorrelaryError, CorrelaryRangeWarning
+import hashlib
+import hmac
+import time
+
+from correlary import Client, CorrelaryError, CorrelaryRangeWarning, verify_webhook
 
 URL = os.environ["CORRELARY_URL"]
 TOKEN = os.environ["CORRELARY_TOKEN"]
@@ -62,6 +66,31 @@ class AgainstTheApp(unittest.TestCase):
         r = self.c.run_template("flat-plate-forced-convection-air", {"T_inf": (20, "degC"), "T_s": (60, "degC"), "p": (1, "atm"), "u_inf": 3, "L": 0.5, "W": 0.3})
         self.assertEqual([s["key"] for s in r["steps"]][:2], ["film-temperature", "air-properties"])
         self.assertGreater(r["outputs"]["h"], 0)
+
+
+class WebhookSignature(unittest.TestCase):
+    """The receiver-side check, against a delivery signed here with the documented scheme (HMAC-SHA-256 of "<t>.<body>")."""
+
+    secret = "whsec_test"
+    body = b'{"event":"version.withdrawn","occurredAt":"2026-12-01T10:00:00.000Z","data":{"slug":"x","version":2}}'
+
+    def headers(self, t, body=None):
+        sig = "v1=" + hmac.new(self.secret.encode(), str(t).encode() + b"." + (body or self.body), hashlib.sha256).hexdigest()
+        return {"Correlary-Webhook-Timestamp": str(t), "Correlary-Webhook-Signature": sig, "Correlary-Webhook-Id": "41"}
+
+    def test_accepts_a_fresh_signed_delivery(self):
+        t = int(time.time())
+        self.assertEqual(verify_webhook(self.secret, self.headers(t), self.body)["data"]["version"], 2)
+
+    def test_refuses_a_replay_tampering_and_a_wrong_secret(self):
+        t = int(time.time()) - 3600
+        with self.assertRaisesRegex(ValueError, "stale"):
+            verify_webhook(self.secret, self.headers(t), self.body)
+        t = int(time.time())
+        with self.assertRaisesRegex(ValueError, "signature"):
+            verify_webhook(self.secret, self.headers(t), self.body.replace(b"2}", b"3}"))
+        with self.assertRaisesRegex(ValueError, "signature"):
+            verify_webhook("whsec_other", self.headers(t), self.body)
 
 
 class RetryAfter(unittest.TestCase):

@@ -4,17 +4,16 @@ import Link from 'next/link';
 import { useMutation, useQuery } from '@tanstack/react-query';
 import { useSearchParams } from 'next/navigation';
 import { useEffect, useMemo, useState } from 'react';
-import type { z } from 'zod';
 import { api, ApiError } from '@/lib/client/api';
 import { formatNumber } from '@/lib/client/units';
 import { bandText, percent as pct } from '@/lib/client/bands';
-import type { adviceAnswer, situationsAnswer } from '@/lib/api/contract';
+import type { ApiAnswer } from '@/lib/client/typed';
 import { SeriesChart, type ChartSeries } from '@/components/charts/series-chart';
 import { Caution } from '@/components/ui/caution';
 import { Sym } from '@/components/calculation/symbol';
 
-type Advice = z.infer<typeof adviceAnswer>;
-type Situations = z.infer<typeof situationsAnswer>;
+type Advice = ApiAnswer<'/api/advice', 'post'>;
+type Situations = ApiAnswer<'/api/advice', 'get'>;
 
 const STATUS: Record<Advice['candidates'][number]['status'], { text: string; cls: string }> = {
   inside: { text: 'inside its ranges', cls: 'bg-ok-bg text-ok' },

@@ -5,12 +5,13 @@ import { useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/client/api';
 import { QueryState } from '@/components/ui/query-state';
 import { StatusBadge } from '@/components/ui/status-badge';
+import type { ApiAnswer } from '@/lib/client/typed';
 
-interface Item { slug: string; title: string; category: string; situation: string; version: number | null; contentHash: string | null; status: string | null }
+type Templates = ApiAnswer<'/api/templates', 'get'>;
 
 /** Governed calculation templates: chains of approved correlations, signed off like a correlation. */
 export function TemplateList() {
-  const q = useQuery({ queryKey: ['templates'], queryFn: () => api<{ items: Item[]; total: number }>('/api/templates?pageSize=200') });
+  const q = useQuery({ queryKey: ['templates'], queryFn: () => api<Templates>('/api/templates?pageSize=200') });
   return (
     <div className="space-y-4">
       <div>

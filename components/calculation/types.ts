@@ -1,11 +1,10 @@
-import type { z } from 'zod';
-import type { runAnswer, stepRecord, chainWarning } from '@/lib/api/contract';
 import type { TemplateDefinition } from '@/lib/engine/template-types';
+import type { ApiAnswer } from '@/lib/client/typed';
 
-/** Answer types derived from the API's own zod schemas (never re-typed). */
-export type RunAnswer = z.infer<typeof runAnswer>;
-export type StepRecordView = z.infer<typeof stepRecord>;
-export type ChainWarningView = z.infer<typeof chainWarning>;
+/** Answer types generated from the API description (lib/client/api-types.ts; never re-typed). */
+export type RunAnswer = ApiAnswer<'/api/templates/{slug}/run', 'post'>;
+export type StepRecordView = NonNullable<RunAnswer['steps']>[number];
+export type ChainWarningView = StepRecordView['warnings'][number];
 
 export interface TemplateVersionView {
   slug: string; kind: 'template'; title: string; version: number; status: string; contentHash: string | null; author: string;

@@ -8,13 +8,9 @@ import { defaultInputs } from './default-inputs';
 import { Caution } from '@/components/ui/caution';
 import { bandText } from '@/lib/client/bands';
 import type { VersionDetail } from './types';
+import type { ApiAnswer } from '@/lib/client/typed';
 
-interface Answer {
-  version: number; contentHash: string | null;
-  outputs: Record<string, number>;
-  bands?: Record<string, { rel: number; basis: string; approximates?: string } | null>;
-  warnings: { symbol: string; value: number; min?: number; max?: number; message: string }[];
-}
+type Answer = ApiAnswer<'/api/correlations/{slug}/evaluate', 'post'>;
 
 export function EvaluatePanel({ detail }: { detail: VersionDetail }) {
   const d = detail.definition;
@@ -84,7 +80,7 @@ export function EvaluatePanel({ detail }: { detail: VersionDetail }) {
                 return (
                   <tr key={o.symbol}>
                     <th className="w-1/3 normal-case">{o.symbol}</th>
-                    <td className="font-mono text-base" data-testid={`out-${o.symbol}`}>{formatNumber(run.data.outputs[o.symbol], 6)}</td>
+                    <td className="font-mono text-base" data-testid={`out-${o.symbol}`}>{formatNumber(run.data.outputs?.[o.symbol] ?? NaN, 6)}</td>
                     <td className="text-xs text-ink-soft">{isDimensionless(o.unit) ? '' : o.unit}</td>
                     <td className="text-xs text-ink-soft" data-testid={`band-${o.symbol}`} title={band?.basis}>{bandText(band)}</td>
                   </tr>

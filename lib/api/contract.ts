@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { CATEGORIES, SOURCE_KINDS } from '@/lib/engine/types';
 import { GRADES } from '@/lib/engine/evidence';
 import { VERSION_STATUSES } from '@/models/correlation';
+import { WEBHOOK_EVENTS } from '@/lib/webhooks/events';
 
 /**
  * The HTTP API contract (see ../shared/PRODUCT.md): the zod schemas the route handlers parse with,
@@ -245,3 +246,44 @@ export const adviceAnswer = z.object({
 export const situationsAnswer = z.object({
   situations: z.array(z.object({ category: z.string(), situation: z.string(), correlations: z.number().int(), inputs: z.array(z.string()), outputs: z.array(z.string()) })),
 });
+
+// Webhooks: what an integrator registers and what the delivery log shows.
+export const webhookEndpoint = z.object({
+  id: z.number().int(), url: z.string(), events: z.array(z.string()), slugs: z.array(z.string()).nullable().describe('followed correlations; null: those your tokens evaluated'),
+  createdAt: z.string(), userId: z.number().int(),
+  deliveries: z.object({ pending: z.number().int(), delivered: z.number().int(), failed: z.number().int() }),
+});
+export const webhookListAnswer = z.object({ items: z.array(webhookEndpoint) });
+export const registerWebhookAnswer = z.object({
+  id: z.number().int(), url: z.string(), events: z.array(z.string()), slugs: z.array(z.string()).nullable(),
+  secret: z.string().describe('the signing secret, shown this once; keep it in the receiver'),
+});
+export const webhookDeliveriesAnswer = z.object({
+  items: z.array(z.object({
+    id: z.number().int(), event: z.string(), status: z.enum(['pending', 'sending', 'delivered', 'failed']), attempts: z.number().int(),
+    nextAttemptAt: z.string().nullable(), lastStatus: z.number().int().nullable(), lastError: z.string().nullable(), deliveredAt: z.string().nullable(),
+    createdAt: z.string(), replayOf: z.number().int().nullable(), body: z.unknown(),
+  })),
+});
+export const webhookDeliveryBody = z.object({
+  event: z.enum(['version.approved', 'version.superseded', 'version.withdrawn', 'calculation.flagged', 'ping']),
+  occurredAt: z.string(),
+  data: z.record(z.string(), z.unknown()).describe('version events: slug, version, contentHash (and supersedes, successor or reason); calculation.flagged: calculation, uses, reason'),
+});
+export const allowlistAnswer = z.object({ prefixes: z.array(z.string()) });
+
+
+export const registerWebhookBody = z.object({
+  url: z.string().trim().min(1, 'Give the URL that receives the deliveries').max(500, 'The URL is too long (500 characters at most)'),
+  events: z.array(z.enum(WEBHOOK_EVENTS)).min(1, 'Choose at least one event').max(WEBHOOK_EVENTS.length)
+    .refine((e) => new Set(e).size === e.length, 'Each event once'),
+  /** The correlations followed, by slug; omitted or empty: those your API tokens have evaluated. */
+  slugs: z.array(z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'A slug: lower-case words joined by hyphens').max(80)).max(100, 'At most 100 correlations').optional().nullable(),
+}).strict();
+
+export const webhookIdParams = z.object({ id: z.coerce.number().int().positive() });
+export const deliveryParams = z.object({ id: z.coerce.number().int().positive(), deliveryId: z.coerce.number().int().positive() });
+export const listWebhooksQuery = z.object({ all: z.enum(['1', '0']).optional() });
+export const allowlistBody = z.object({
+  prefixes: z.array(z.string().trim().min(1, 'An empty prefix').max(300, 'A prefix is too long (300 characters at most)')).max(50, 'At most 50 prefixes'),
+}).strict();

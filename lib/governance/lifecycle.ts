@@ -3,6 +3,7 @@ import { db, type CorrelationVersion, type Correlation } from '@/models';
 import { AppError } from '@/lib/http/errors';
 import { appendAuditEvent } from '@/lib/audit/log';
 import { enqueueMail, deliverPendingMail, isMailDeferred, type MailMessage } from '@/lib/mail/outbox';
+import { enqueueVersionEvent } from '@/lib/webhooks/service';
 import { usersWithRole, findUserById, type AuthUser } from '@/lib/auth/users';
 import { verifyPassword } from '@/lib/auth/passwords';
 import { personBuckets, throttledCheck } from '@/lib/auth/throttle';
@@ -299,9 +300,11 @@ export async function decideVersion({ actor, slug, version, decision, comment, p
       if (previous) {
         await previous.update({ status: 'superseded', supersededAt: now }, { transaction });
         superseded = previous.version;
+        await enqueueVersionEvent({ transaction, event: 'version.superseded', slug, data: { slug, version: previous.version, contentHash: previous.contentHash, successor: { version, contentHash: v.contentHash } } });
         await appendAuditEvent({ transaction, event: { actorId: actor.id, action: 'version.superseded', entityType: 'version', entityId: `${slug}@${previous.version}`, beforeHash: previous.contentHash, afterHash: previous.contentHash, details: { by: version } } });
       }
       await v.update({ status: 'approved', approvedAt: now, approvedById: actor.id }, { transaction });
+      await enqueueVersionEvent({ transaction, event: 'version.approved', slug, data: { slug, version, contentHash: v.contentHash, approvedAt: now.toISOString(), supersedes: superseded } });
     } else {
       await v.update({ status: 'returned', returnedAt: now }, { transaction });
     }
@@ -340,6 +343,10 @@ export async function withdrawVersion({ actor, slug, version, reason }: { actor:
     await SignOff.create({ versionId: v.id, userId: actor.id, decision: 'withdrawn', comment: reason.trim(), meaning: MEANING_OF_WITHDRAWAL, contentHash: v.contentHash }, { transaction });
     await appendAuditEvent({ transaction, event: { actorId: actor.id, action: 'version.withdrawn', entityType: 'version', entityId: `${slug}@${version}`, beforeHash: v.contentHash, afterHash: v.contentHash, details: { reason: reason.trim() } } });
     const uses = await usesOfVersion(v.id, transaction);
+    await enqueueVersionEvent({ transaction, event: 'version.withdrawn', slug, data: { slug, version, contentHash: v.contentHash, reason: reason.trim(), withdrawnAt: new Date().toISOString() } });
+    for (const k of uses.calculations) {
+      await enqueueVersionEvent({ transaction, event: 'calculation.flagged', slug, people: [k.ownerId, ...k.savedBy], data: { calculation: { id: k.id, title: k.title, project: k.project, url: `${appUrl()}/calculations/${k.id}` }, uses: { slug, version, contentHash: v.contentHash }, reason: reason.trim() } });
+    }
     const affected = peopleToTell(uses);
     const users = affected.length ? await User.findAll({ where: { id: affected, isActive: true }, transaction }) : [];
     await enqueueMail({ transaction, messages: users.map((u) => {

@@ -62,7 +62,16 @@ export const ACCESS = {
   'GET /api/tokens': {},
   'POST /api/tokens': {},
   'DELETE /api/tokens/{id}': {},
+  // Webhooks: each person's own endpoints (admins see all); tokens with "write" may manage them.
+  'GET /api/webhooks': { scope: 'write' },
+  'POST /api/webhooks': { scope: 'write' },
+  'DELETE /api/webhooks/{id}': { scope: 'write' },
+  'GET /api/webhooks/{id}/deliveries': { scope: 'write' },
+  'POST /api/webhooks/{id}/deliveries/{deliveryId}/replay': { scope: 'write' },
+  'POST /api/webhooks/{id}/ping': { scope: 'write' },
   // Administration: admins, in person.
+  'GET /api/admin/webhook-allowlist': { roles: ['admin'] },
+  'PUT /api/admin/webhook-allowlist': { roles: ['admin'] },
   'GET /api/admin/users': { roles: ['admin'] },
   'POST /api/admin/users': { roles: ['admin'] },
   'PATCH /api/admin/users/{id}': { roles: ['admin'] },

@@ -8,6 +8,7 @@ import { closeSequelize } from '@/lib/db/connection';
 import { createApiToken, revokeApiToken } from '@/lib/api/tokens';
 import { compiled, type Definition } from '@/lib/engine';
 import { cylinderSweep } from '../integrator-example';
+import { evaluatePinned } from '@/clients/typescript/evaluate';
 
 const CB = 'cylinder-crossflow-churchill-bernstein';
 const userId = async (email: string) => (await db().User.findOne({ where: { email } }))!.id;
@@ -202,6 +203,16 @@ describe('integrator API', () => {
       expect(r.rows[1].Nu_D).toBeGreaterThan(r.rows[0].Nu_D);
       expect(r.rows[2].warnings[0]).toMatch(/Pe_D = 0\.071 is below the minimum 0\.2/);
     });
+  });
+
+  it('works through the typed openapi-fetch client generated from the description (clients/typescript/evaluate.ts)', async () => {
+    const r = await evaluatePinned(BASE, evalToken, 'pipe-turbulent-gnielinski', 1, { Re_D: 3e4, Pr: 4.3 });
+    expect(r.version).toBe(1);
+    expect(r.contentHash).toMatch(/^[0-9a-f]{64}$/);
+    // Gnielinski at Re_D = 3×10⁴, Pr = 4.3 recomputed here from the published form with the Petukhov friction factor.
+    const f = (0.79 * Math.log(3e4) - 1.64) ** -2;
+    expect(r.outputs.Nu_D).toBeCloseTo(((f / 8) * (3e4 - 1000) * 4.3) / (1 + 12.7 * Math.sqrt(f / 8) * (4.3 ** (2 / 3) - 1)), 6);
+    await expect(evaluatePinned(BASE, evalToken, 'pipe-turbulent-gnielinski', 1, { Re_D: Number.NaN, Pr: 4.3 })).rejects.toThrow(/invalid/);
   });
 
   it('keeps sessions working on the API', async () => {

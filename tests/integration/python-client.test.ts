@@ -15,7 +15,7 @@ describe('the Python client', () => {
     expect(await res.text()).toMatch(/^"""Correlary client/);
   });
 
-  it('passes its own tests: single, rows, units, warnings, errors, pinned version and ETag, search, template, Retry-After', async () => {
+  it('passes its own tests: single, rows, units, warnings, errors, pinned version and ETag, search, template, Retry-After, the webhook signature check', async () => {
     const integrator = (await db().User.findOne({ where: { email: 'integrator@demo.example' } }))!.id;
     const { token } = await createApiToken({ actorId: null, userId: integrator, name: 'python client', scopes: ['read', 'evaluate'], expiresAt: null });
     expect((await call('/api/correlations?pageSize=1', { token })).status).toBe(200);
@@ -23,7 +23,7 @@ describe('the Python client', () => {
       env: { ...process.env, CORRELARY_URL: BASE, CORRELARY_TOKEN: token, PYTHONPATH: 'clients/python', PYTHONDONTWRITEBYTECODE: '1' }, encoding: 'utf8',
     });
     expect(run.status, run.stderr).toBe(0);
-    expect(run.stderr).toMatch(/Ran 9 tests/);
+    expect(run.stderr).toMatch(/Ran 11 tests/);
     expect(run.stderr).toMatch(/\nOK\s*$/);
   });
 });

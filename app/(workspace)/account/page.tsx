@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { requireUser } from '@/lib/auth/page';
 import { PasswordForm } from './password-form';
 import { MyTokens } from './my-tokens';
@@ -17,7 +18,10 @@ export default async function AccountPage() {
         <div className="pt-4"><PasswordForm /></div>
         <div className="pt-4"><EndSessions /></div>
       </section>
-      <MyTokens />
+      <div className="space-y-4">
+        <MyTokens />
+        <p className="panel text-sm">Systems that depend on a correlation version can be told when it changes: <Link href="/account/webhooks" className="text-brand-dark underline">webhooks</Link>.</p>
+      </div>
     </div>
   );
 }

@@ -7,6 +7,7 @@ const TABS = [
   { href: '/admin/audit', label: 'Audit trail' },
   { href: '/admin/mail', label: 'Sent mail' },
   { href: '/admin/evidence', label: 'Evidence policy' },
+  { href: '/admin/webhooks', label: 'Webhook allow-list' },
 ];
 
 export default async function AdminLayout({ children }: { children: React.ReactNode }) {

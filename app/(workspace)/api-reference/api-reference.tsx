@@ -7,8 +7,14 @@ import { QueryState } from '@/components/ui/query-state';
 interface Operation { operationId: string; summary: string; parameters?: { name: string; in: string; required: boolean; schema: object }[]; requestBody?: { content: Record<string, { schema: object }> }; responses: Record<string, { description?: string; $ref?: string }> }
 interface Doc { info: { title: string; version: string; description: string }; paths: Record<string, Record<string, Operation>> }
 
+const PYTHON_EXAMPLE = `# curl -O <this server>/api/clients/correlary.py
+from correlary import Client, verify_webhook
+c = Client("<this server>", token="crl_…")
+r = c.evaluate("pipe-turbulent-gnielinski", {"Re_D": 3e4, "Pr": 4.3}, version=1)
+print(r["outputs"]["Nu_D"], r["version"], r["contentHash"])`;
+
 /** The API reference, rendered from /api/openapi.json (itself generated from the handlers' zod schemas). */
-export function ApiReference() {
+export function ApiReference({ typedExample }: { typedExample: string }) {
   const q = useQuery({ queryKey: ['openapi'], queryFn: () => api<Doc>('/api/openapi.json') });
   return (
     <QueryState query={q}>
@@ -17,6 +23,14 @@ export function ApiReference() {
           <header>
             <h1 className="text-xl font-semibold">{doc.info.title} <span className="font-mono text-sm text-ink-soft">{doc.info.version}</span></h1>
             <p className="text-sm text-ink-soft">{doc.info.description}</p>
+            <details className="mt-2">
+              <summary className="cursor-pointer text-sm font-medium">Typed TypeScript client (openapi-fetch with types generated from this description)</summary>
+              <pre className="mt-1 overflow-x-auto rounded bg-paper-sunk p-2 text-xs" data-testid="typed-example">{typedExample}</pre>
+            </details>
+            <details>
+              <summary className="cursor-pointer text-sm font-medium">Python client (standard library only)</summary>
+              <pre className="mt-1 overflow-x-auto rounded bg-paper-sunk p-2 text-xs">{PYTHON_EXAMPLE}</pre>
+            </details>
             <p className="mt-1 text-sm">Machine-readable: <a className="text-brand-dark underline" href="/api/openapi.json">/api/openapi.json</a> (OpenAPI 3.1). Send <code>Authorization: Bearer &lt;token&gt;</code>; errors answer <code>{'{ "error": { "code", "message", "details"? } }'}</code>.</p>
           </header>
           {Object.entries(doc.paths).map(([path, ops]) => Object.entries(ops).map(([method, op]) => (

@@ -7,11 +7,9 @@ import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 import { api } from '@/lib/client/api';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { CATEGORIES, CATEGORY_LABELS } from '@/lib/engine/types';
+import type { ApiAnswer } from '@/lib/client/typed';
 
-interface Item {
-  slug: string; title: string; category: string; situation: string; latestApprovedVersion: number | null;
-  latestVersion: number; latestStatus: string; validity: string; updatedAt: string; evidenceGrade: string | null;
-}
+type Library = ApiAnswer<'/api/correlations', 'get'>;
 type SortKey = 'title' | 'category' | 'updated' | 'slug';
 
 const PAGE_SIZE = 25;
@@ -48,7 +46,7 @@ export function LibraryTable() {
   if (category) params.set('category', category);
   if (grade) params.set('grade', grade);
   if (status) params.set('status', status);
-  const list = useQuery({ queryKey: ['library', params.toString()], queryFn: () => api<{ items: Item[]; total: number }>(`/api/correlations?${params}`), placeholderData: keepPreviousData });
+  const list = useQuery({ queryKey: ['library', params.toString()], queryFn: () => api<Library>(`/api/correlations?${params}`), placeholderData: keepPreviousData });
 
   const header = (key: SortKey, label: string) => (
     <th aria-sort={sort === key ? (dir === 'asc' ? 'ascending' : 'descending') : 'none'}>
