@@ -21,7 +21,7 @@ const EVENT_TEXT: Record<(typeof WEBHOOK_EVENTS)[number], string> = {
 /** Your webhook endpoints: register one (its secret shown once), see each delivery, send one again, send a test. */
 export function WebhooksManager() {
   const qc = useQueryClient();
-  const list = useQuery({ queryKey: ['webhooks'], queryFn: () => api<Endpoints>('/api/webhooks') });
+  const list = useQuery({ queryKey: ['webhooks'], queryFn: () => api<Endpoints>('/api/webhooks'), refetchInterval: 5000 });
   const [form, setForm] = useState({ url: '', slugs: '', events: ['version.approved', 'version.withdrawn'] as string[] });
   const [created, setCreated] = useState<Registered | null>(null);
   const [copied, setCopied] = useState(false);
@@ -105,11 +105,11 @@ function DeliveryLog({ id }: { id: number }) {
   const [note, setNote] = useState('');
   const replay = useMutation({
     mutationFn: (deliveryId: number) => api<{ id: number }>(`/api/webhooks/${id}/deliveries/${deliveryId}/replay`, { method: 'POST' }),
-    onSuccess: (r, deliveryId) => { setNote(`Delivery ${deliveryId} queued again as ${r.id}.`); void qc.invalidateQueries({ queryKey: ['webhook-deliveries', id] }); },
+    onSuccess: (r, deliveryId) => { setNote(`Delivery ${deliveryId} queued again as ${r.id}.`); void qc.invalidateQueries({ queryKey: ['webhook-deliveries', id] }); void qc.invalidateQueries({ queryKey: ['webhooks'] }); },
   });
   const ping = useMutation({
     mutationFn: () => api<{ id: number }>(`/api/webhooks/${id}/ping`, { method: 'POST' }),
-    onSuccess: (r) => { setNote(`Test delivery ${r.id} queued.`); void qc.invalidateQueries({ queryKey: ['webhook-deliveries', id] }); },
+    onSuccess: (r) => { setNote(`Test delivery ${r.id} queued.`); void qc.invalidateQueries({ queryKey: ['webhook-deliveries', id] }); void qc.invalidateQueries({ queryKey: ['webhooks'] }); },
   });
   return (
     <div className="space-y-2 rounded border border-line p-3" aria-label={`Delivery log of endpoint ${id}`}>
