@@ -4,6 +4,7 @@ import { db, type Role } from '@/models';
 import { AppError } from '@/lib/http/errors';
 import { appendAuditEvent } from '@/lib/audit/log';
 import { userLabels } from '@/lib/auth/labels';
+import { freshCache } from '@/lib/cache/fresh';
 
 /** read: look up; evaluate: evaluate and run (rate-limited); write: author drafts and save calculations. */
 export const TOKEN_SCOPES = ['read', 'evaluate', 'write'] as const;
@@ -38,7 +39,7 @@ export async function revokeApiToken({ actorId, tokenId, isAdmin }: { actorId: n
     await row.update({ revokedAt: new Date() }, { transaction });
     await appendAuditEvent({ transaction, event: { actorId, action: 'token.revoked', entityType: 'api_token', entityId: String(row.id), details: { prefix: row.prefix } } });
     return row;
-  });
+  }).finally(() => forgetCachedToken(tokenId));
 }
 
 export async function listApiTokens({ userId }: { userId?: number }) {
@@ -52,18 +53,41 @@ export async function listApiTokens({ userId }: { userId?: number }) {
   }));
 }
 
+interface TokenRow {
+  id: number; user_id: number; scopes: string; expires_at: Date | null; revoked_at: Date | null; last_used_at: Date | null;
+  email: string; name: string; is_active: number; roles: string | null;
+}
+/** Token rows by hash, at most FRESHNESS_MS old (lib/cache/fresh.ts); unknown hashes are remembered too (`none`). */
+const tokenCache = freshCache<TokenRow | { none: true }>(20_000);
+
+/** This instance forgets a token at once when it revokes it; the others within FRESHNESS_MS. */
+export function forgetCachedToken(tokenId: number) {
+  for (const [key, row] of tokenCache.entries()) if ('id' in row && row.id === tokenId) tokenCache.delete(key);
+}
+
+/** After a change to a user (deactivation, roles): this instance forgets their tokens at once. */
+export function forgetCachedTokensOfUser(userId: number) {
+  for (const [key, row] of tokenCache.entries()) if ('user_id' in row && row.user_id === userId) tokenCache.delete(key);
+}
+
 /**
- * Resolves a bearer token, with its user and roles, in one query on every request (no cache, so a
- * revoked or expired token is refused at once).
+ * Resolves a bearer token, with its user and roles: one query, then answered from memory for at most
+ * FRESHNESS_MS (1 s by default), so a revoked or expired token, a deactivated user or a changed role takes effect
+ * on every instance within that bound (at once on the instance that made the change). Expiry is checked on
+ * every request against the clock.
  */
 export async function resolveApiToken(plain: string) {
   const { sequelize, ApiToken } = db();
-  const [row] = await sequelize.query<{
-    id: number; user_id: number; scopes: string; expires_at: Date | null; revoked_at: Date | null; last_used_at: Date | null;
-    email: string; name: string; is_active: number; roles: string | null;
-  }>(`SELECT t.id, t.user_id, t.scopes, t.expires_at, t.revoked_at, t.last_used_at, u.email, u.name, u.is_active,
+  const hash = hashToken(plain);
+  let cached = tokenCache.get(hash);
+  if (!cached) {
+    const [found] = await sequelize.query<TokenRow>(`SELECT t.id, t.user_id, t.scopes, t.expires_at, t.revoked_at, t.last_used_at, u.email, u.name, u.is_active,
         (SELECT GROUP_CONCAT(r.role ORDER BY r.role) FROM user_roles r WHERE r.user_id = u.id) AS roles
-      FROM api_tokens t JOIN users u ON u.id = t.user_id WHERE t.token_hash = ?`, { replacements: [hashToken(plain)], type: QueryTypes.SELECT });
+      FROM api_tokens t JOIN users u ON u.id = t.user_id WHERE t.token_hash = ?`, { replacements: [hash], type: QueryTypes.SELECT });
+    cached = found ?? { none: true };
+    tokenCache.set(hash, cached);
+  }
+  const row = 'none' in cached ? undefined : cached;
   if (!row) throw new AppError('unauthenticated:token', 'The API token is not valid.');
   if (row.revoked_at) throw new AppError('unauthenticated:token-revoked', 'The API token was revoked.');
   if (row.expires_at && new Date(row.expires_at).getTime() <= Date.now()) {
@@ -72,7 +96,8 @@ export async function resolveApiToken(plain: string) {
   if (!row.is_active) throw new AppError('unauthenticated:token', 'The API token belongs to an inactive user.');
   // Last-used is advisory: written without waiting, at most once a minute per token.
   if (!row.last_used_at || Date.now() - new Date(row.last_used_at).getTime() > 60_000) {
-    void ApiToken.update({ lastUsedAt: new Date() }, { where: { id: row.id } }).catch(() => undefined);
+    row.last_used_at = new Date();
+    void ApiToken.update({ lastUsedAt: row.last_used_at }, { where: { id: row.id } }).catch(() => undefined);
   }
   return {
     id: row.id, scopes: row.scopes.split(' ') as TokenScope[],

@@ -1,4 +1,5 @@
 import { Op, type Transaction } from 'sequelize';
+import { forgetCachedTokensOfUser } from '@/lib/api/tokens';
 import { z } from 'zod';
 import { db, ROLES, type Role, type User } from '@/models';
 import { AppError } from '@/lib/http/errors';
@@ -111,7 +112,7 @@ export async function updateUser({ actorId, userId, roles, isActive, name }: {
     const action = roles && before.roles.join() !== after.roles.join() ? 'user.roles-changed' : 'user.updated';
     await appendAuditEvent({ transaction, event: { actorId, action, entityType: 'user', entityId: String(userId), details: { before, after } } });
     return after;
-  });
+  }).finally(() => forgetCachedTokensOfUser(userId));
 }
 
 export async function changePassword({ userId, currentPassword, newPassword }: {

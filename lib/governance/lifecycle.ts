@@ -4,6 +4,7 @@ import { AppError } from '@/lib/http/errors';
 import { appendAuditEvent } from '@/lib/audit/log';
 import { enqueueMail, deliverPendingMail, isMailDeferred, type MailMessage } from '@/lib/mail/outbox';
 import { enqueueVersionEvent } from '@/lib/webhooks/service';
+import { forgetServableVersions } from './servable';
 import { usersWithRole, findUserById, type AuthUser } from '@/lib/auth/users';
 import { verifyPassword } from '@/lib/auth/passwords';
 import { personBuckets, throttledCheck } from '@/lib/auth/throttle';
@@ -322,7 +323,7 @@ export async function decideVersion({ actor, slug, version, decision, comment, p
       }] });
     }
     return { slug, version, status: decision === 'approve' ? 'approved' : 'returned', superseded };
-  });
+  }).finally(forgetServableVersions);
   await flushMail();
   return outcome;
 }
@@ -365,7 +366,7 @@ export async function withdrawVersion({ actor, slug, version, reason }: { actor:
       };
     }) });
     return { slug, version, status: 'withdrawn' as const, notified: users.map((u) => u.email) };
-  });
+  }).finally(forgetServableVersions);
   await flushMail();
   return outcome;
 }

@@ -4,6 +4,7 @@ import { AppError } from '@/lib/http/errors';
 import type { AuthUser } from '@/lib/auth/users';
 import type { Pin } from '@/lib/engine/template-types';
 import { canSeeVersion } from './access';
+import { freshCache } from '@/lib/cache/fresh';
 
 /** What evaluation needs of a version, read in one plain query (the definition stays text until needed). */
 export interface ServableVersion {
@@ -31,17 +32,34 @@ const toServable = (r: Row): ServableVersion => ({
 const NOUN: Record<EntryKind, string> = { correlation: 'correlation', template: 'calculation template' };
 
 /**
+ * Frozen versions looked up by slug (and number, or "approved"), at most FRESHNESS_MS old (lib/cache/fresh.ts): a
+ * withdrawal or a new approval reaches every instance within that bound, the instance that made it at once
+ * (`forgetServableVersions`). The integrity check still re-hashes what the database held when the entry was read.
+ */
+const FROZEN: VersionStatus[] = ['approved', 'superseded', 'withdrawn'];
+const servableCache = freshCache<ServableVersion>(5_000);
+export function forgetServableVersions() {
+  servableCache.clear();
+}
+
+/**
  * The version to evaluate: an explicit number, or the approved one, of a correlation or (kind
  * "template") a calculation template. Visibility rules apply; a withdrawn version is found only when
  * pinned (it is never "approved").
  */
 export async function loadServableVersion({ actor, slug, version, kind = 'correlation' }: { actor: AuthUser; slug: string; version?: number; kind?: EntryKind }): Promise<ServableVersion> {
-  const { sequelize } = db();
-  const [row] = await sequelize.query<Row>(`SELECT ${COLUMNS}
-      FROM correlation_versions v JOIN correlations c ON c.id = v.correlation_id
-      WHERE c.slug = ? AND c.kind = ? AND ${version !== undefined ? 'v.version = ?' : "v.status = 'approved'"} LIMIT 1`,
-  { replacements: version !== undefined ? [slug, kind, version] : [slug, kind], type: QueryTypes.SELECT });
-  const found = row && toServable(row);
+  const key = `${kind}|${slug}|${version ?? 'approved'}`;
+  let found = servableCache.get(key);
+  if (!found) {
+    const { sequelize } = db();
+    const [row] = await sequelize.query<Row>(`SELECT ${COLUMNS}
+        FROM correlation_versions v JOIN correlations c ON c.id = v.correlation_id
+        WHERE c.slug = ? AND c.kind = ? AND ${version !== undefined ? 'v.version = ?' : "v.status = 'approved'"} LIMIT 1`,
+    { replacements: version !== undefined ? [slug, kind, version] : [slug, kind], type: QueryTypes.SELECT });
+    found = row && toServable(row);
+    // Only frozen versions are remembered: a draft changes under its author's hands.
+    if (found && FROZEN.includes(found.status)) servableCache.set(key, found);
+  }
   if (!found || !canSeeVersion(actor, found)) {
     const { Correlation } = db();
     if (!(await Correlation.findOne({ where: { slug, kind }, attributes: ['id'] }))) throw new AppError(`not_found:${kind}`, `No ${NOUN[kind]} "${slug}".`);

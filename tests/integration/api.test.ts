@@ -175,11 +175,20 @@ describe('integrator API', () => {
     await sequelize.query('INSERT INTO rate_limit_windows (bucket, window_start, hits) VALUES (?, ?, ?)', {
       replacements: [`token:${t.id}`, windowStart, Number(process.env.RATE_LIMIT_PER_MINUTE ?? 100000)], type: QueryTypes.INSERT,
     });
-    const res = await call(`/api/correlations/${CB}/evaluate`, { token: t.token, body });
+    // This instance learns the shared count at its next sync (RATE_SYNC_MS, 200 ms): within that bound it refuses.
+    let res = await call(`/api/correlations/${CB}/evaluate`, { token: t.token, body });
+    let admitted = 0;
+    for (let i = 0; i < 40 && res.status === 200; i++) {
+      admitted++;
+      await new Promise((r) => setTimeout(r, 50));
+      res = await call(`/api/correlations/${CB}/evaluate`, { token: t.token, body });
+    }
     if (Math.floor(Date.now() / 60_000) * 60_000 === windowStart) {
       expect(res.status).toBe(429);
       expect(res.body.error.code).toBe('rate_limited:requests');
       expect(Number(res.headers.get('retry-after'))).toBeGreaterThan(0);
+      // The overshoot is what this instance admits before its first sync: a handful of requests at most.
+      expect(admitted).toBeLessThanOrEqual(10);
     } else {
       expect(res.status).toBe(200); // the minute turned over between the insert and the call
     }
