@@ -1,5 +1,5 @@
 import type { MathNode } from 'mathjs';
-import { checkExpression, ExpressionError, FUNCTIONS, toJs, BUILTIN_CONSTANTS } from './expressions';
+import { checkExpression, ExpressionError, FUNCTIONS, FUNCTION_IMPLS, toJs, BUILTIN_CONSTANTS } from './expressions';
 import { breaks, compileLimits, EvaluationError, readInputValues, warningOf, type CompiledDefinition, type CompiledLimit } from './compile';
 import { DefinitionError, type DefinitionIssue } from './analyse';
 import { convert, describeDimension, hasDimensionOf, isDimensionless, isOffsetUnit, parseUnit, quantity } from './units';
@@ -20,7 +20,6 @@ import type { ChainResult, ChainStep, ChainWarning, CorrelationStep, ExpressionS
 
 export type Resolve = (pin: Pin) => CompiledDefinition | { problem: string };
 
-const FUNCTION_IMPLS = Object.freeze(Object.fromEntries(Object.entries(FUNCTIONS).map(([k, v]) => [k, v.impl])));
 
 interface LeafRuntime {
   cost: number;

@@ -1,4 +1,4 @@
-import { FUNCTIONS, toJs } from './expressions';
+import { FUNCTION_IMPLS, toJs } from './expressions';
 import { brent, interpolate, NoRootError } from './solve';
 import { convert, isDimensionless } from './units';
 import { analyseDefinition, DefinitionError, type Analysed } from './analyse';
@@ -71,9 +71,53 @@ export interface CompiledDefinition {
 }
 
 type WarnFn = (limit: number, value: number) => void;
-type RunFn = (v: Float64Array, W: WarnFn, F: typeof FUNCTION_IMPLS, S: typeof solveStep, T: typeof tableStep) => void;
+type RunFn = (v: Float64Array, W: WarnFn) => void;
+/**
+ * Runs rows from `at[0]` on; `at[0]` always holds the row being computed (so W and a thrown error can be filed under
+ * it). Returns `count` when done, or the first row whose outputs are not finite (not written).
+ */
+type ManyFn = (rows: Float64Array, count: number, out: Float64Array, W: WarnFn, at: Int32Array) => number;
 
-const FUNCTION_IMPLS = Object.freeze(Object.fromEntries(Object.entries(FUNCTIONS).map(([k, v]) => [k, v.impl]))) as Record<string, (...a: number[]) => number>;
+/**
+ * Turns the generated lines into two functions: run(v, W) for one row in the slot array v, and many(…) for a table of
+ * rows. The lines hold only numbers, v[i] slots, and calls to F.<whitelisted name>, S (solve), T (table) and W (warn),
+ * generated from the checked tree. While a row is computed its slots are local variables (registers, not memory);
+ * each function used is bound once to a constant of the enclosing factory, so the hot loop calls it directly and V8
+ * inlines the Math built-ins as in hand-written code. A row that raises no warning costs no more than its formula.
+ */
+function buildRunner(lines: string[], tableData: Float64Array[], nInputs: number, nSlots: number, outputSlots: number[]): { run: RunFn; many: ManyFn; source: string } {
+  const body = lines.join('\n');
+  const used = [...new Set([...body.matchAll(/\bF\.([A-Za-z0-9_]+)\(/g)].map((m) => m[1]))];
+  for (const name of used) if (!Object.hasOwn(FUNCTION_IMPLS, name)) throw new Error(`generated code calls an unknown function ${name}`);
+  const locals = used.map((name) => `const F_${name} = F.${name};`).join(' ');
+  const code = body.replace(/\bF\.([A-Za-z0-9_]+)\(/g, 'F_$1(').replace(/\bv\[(\d+)\]/g, 's$1');
+  const declare = (from: (i: number) => string) => `let ${Array.from({ length: nSlots }, (_, i) => `s${i} = ${i < nInputs ? from(i) : '0'}`).join(', ')};`;
+  const writeBack = Array.from({ length: nSlots - nInputs }, (_, j) => `v[${nInputs + j}] = s${nInputs + j};`).join(' ');
+  const nOut = outputSlots.length;
+  const finite = outputSlots.map((k) => `Number.isFinite(s${k})`).join(' && ');
+  const store = outputSlots.map((k, i) => `out[o + ${i}] = s${k};`).join(' ');
+  const source = `"use strict"; ${locals}
+function run(v, W) {
+${declare((i) => `v[${i}]`)}
+${code}
+${writeBack}
+}
+function many(rows, count, out, W, at) {
+for (let r = at[0]; r < count; r++) {
+at[0] = r;
+const b = r * ${nInputs}, o = r * ${nOut};
+${declare((i) => `rows[b + ${i}]`)}
+${code}
+if (!(${finite})) return r;
+${store}
+}
+at[0] = count;
+return count;
+}
+return { run, many };`;
+  const factory = new Function('F', 'S', 'T', 'D', source) as (F: unknown, S: typeof solveStep, T: typeof tableStep, D: Float64Array[]) => { run: RunFn; many: ManyFn };
+  return { ...factory(FUNCTION_IMPLS, solveStep, tableStep, tableData), source };
+}
 
 function solveStep(f: (x: number) => number, lo: number, hi: number, symbol: string): number {
   try {
@@ -245,47 +289,52 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
     lines.push(`v[${k}] = ${toJs(out.checked.node, slots)};`);
     for (const [l, i] of limitsOf(out.symbol)) lines.push(limitCheck(k, i, l));
   }
-  const source = `"use strict";\n${lines.join('\n')}`;
-  // The body holds only numbers, v[i] slots and F/S/T/W/D calls generated from the whitelisted tree.
-  const body = new Function('v', 'W', 'F', 'S', 'T', 'D', source) as (...a: unknown[]) => void;
-  const run: RunFn = (v, W, F, S, T) => body(v, W, F, S, T, tableData);
 
   const inputSymbols = definition.inputs.map((i) => i.symbol);
   const outputSymbols = definition.outputs.map((o) => o.symbol);
   const outputSlots = outputSymbols.map(slot);
   const nSlots = slots.size;
+  const { run, many, source } = buildRunner(lines, tableData, inputSymbols.length, nSlots, outputSlots);
 
   const runMany = (rows: Float64Array, count: number) => {
-    const nIn = inputSymbols.length;
     const nOut = outputSymbols.length;
-    const v = new Float64Array(nSlots);
     const outputs = new Float64Array(count * nOut);
     const warningsByRow = new Map<number, Warning[]>();
     const errors = new Map<number, EvaluationError>();
-    let row = 0;
-    let pending: Warning[] | null = null;
+    const at = new Int32Array(1);
+    // Warnings are rare: W files them under the current row directly.
     const W: WarnFn = (index, value) => {
       const lim = limits[index];
       const w = warningOf(lim, value);
-      if (lim.action === 'refuse') throw new EvaluationError('refused', `${w.message}. This limit is marked hard: no result is given.`, lim.symbol, [...(pending ?? []), w]);
-      (pending ??= []).push(w);
+      let list = warningsByRow.get(at[0]);
+      if (lim.action === 'refuse') throw new EvaluationError('refused', `${w.message}. This limit is marked hard: no result is given.`, lim.symbol, [...(list ?? []), w]);
+      if (!list) warningsByRow.set(at[0], (list = []));
+      list.push(w);
     };
-    for (row = 0; row < count; row++) {
-      pending = null;
-      for (let i = 0; i < nIn; i++) v[i] = rows[row * nIn + i];
+    const refuse = (row: number, err: EvaluationError) => {
+      errors.set(row, err);
+      outputs.fill(NaN, row * nOut, (row + 1) * nOut);
+      at[0] = row + 1;
+    };
+    // The generated loop runs until it finishes, a row throws (a hard limit, no root) or a row's outputs are not
+    // finite; that row is recorded and the loop resumes after it.
+    while (at[0] < count) {
+      let stopped: number;
       try {
-        run(v, W, FUNCTION_IMPLS as never, solveStep, tableStep);
-        for (let i = 0; i < nOut; i++) {
-          const value = v[outputSlots[i]];
-          if (!Number.isFinite(value)) throw new EvaluationError('not-finite', notFiniteMessage(outputSymbols[i], value, pending ?? []), outputSymbols[i], pending ?? []);
-          outputs[row * nOut + i] = value;
-        }
+        stopped = many(rows, count, outputs, W, at);
       } catch (err) {
         if (!(err instanceof EvaluationError)) throw err;
-        errors.set(row, err);
-        for (let i = 0; i < nOut; i++) outputs[row * nOut + i] = NaN;
+        refuse(at[0], err);
+        continue;
       }
-      if (pending) warningsByRow.set(row, pending);
+      if (stopped >= count) break;
+      // Which output is not finite, and what the row's warnings say about why: run it once more, alone.
+      const v = new Float64Array(nSlots);
+      v.set(rows.subarray(stopped * inputSymbols.length, (stopped + 1) * inputSymbols.length));
+      run(v, () => undefined);
+      const i = outputSlots.findIndex((k) => !Number.isFinite(v[k]));
+      const warnings = warningsByRow.get(stopped) ?? [];
+      refuse(stopped, new EvaluationError('not-finite', notFiniteMessage(outputSymbols[i], v[outputSlots[i]], warnings), outputSymbols[i], warnings));
     }
     return { outputs, warnings: warningsByRow, errors };
   };
@@ -302,7 +351,7 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
       }
       warnings.push(w);
     };
-    run(v, W, FUNCTION_IMPLS as never, solveStep, tableStep);
+    run(v, W);
     const outputs: Record<string, number> = {};
     for (let i = 0; i < outputSymbols.length; i++) {
       const value = v[outputSlots[i]];
@@ -327,7 +376,7 @@ export function compileDefinition(definition: Definition): CompiledDefinition {
     runMany,
     readInputs,
     evaluate: (inputs) => runValues(readInputs(inputs, 'inputs')),
-    exec: (v, W) => run(v, W, FUNCTION_IMPLS as never, solveStep, tableStep),
+    exec: run,
     nSlots,
     outputSlots,
     rowCost: rowCostOf(analysed),

@@ -46,6 +46,16 @@ export const FUNCTIONS: Record<string, { impl: (...a: number[]) => number; min: 
   besselK1: { impl: (x) => (x > 0 ? besselk(x, 1) : NaN), min: 1, max: 1, tex: 'K_1' },
 };
 
+/**
+ * What generated code may call as F.<name>: the whitelisted functions, plus helpers the code generator alone emits
+ * (never reachable from an expression's text, which is checked against FUNCTIONS).
+ */
+export const FUNCTION_IMPLS: Readonly<Record<string, (...a: number[]) => number>> = Object.freeze({
+  ...Object.fromEntries(Object.entries(FUNCTIONS).map(([k, v]) => [k, v.impl])),
+  sq: (x: number) => x * x,
+  cbrtp: (x: number) => (x > 0 ? Math.cbrt(x) : Math.pow(x, 1 / 3)),
+});
+
 /** Named numeric constants usable without declaring them. */
 export const BUILTIN_CONSTANTS: Record<string, number> = { pi: Math.PI, e: Math.E };
 
@@ -177,6 +187,29 @@ function numberLiteral(v: number): string {
   return v < 0 ? `(${s})` : s;
 }
 
+/** The value of a subtree made of numbers and arithmetic only (undefined if it holds a symbol or a call). */
+function constantValue(node: AnyNode): number | undefined {
+  switch (node.type) {
+    case 'ConstantNode': return typeof node.value === 'number' ? node.value : undefined;
+    case 'ParenthesisNode': return constantValue(node.content!);
+    case 'OperatorNode': {
+      const a = node.args!.map(constantValue);
+      if (a.some((x) => x === undefined)) return undefined;
+      const [x, y] = a as number[];
+      switch (String(node.fn)) {
+        case 'unaryMinus': return -x;
+        case 'unaryPlus': return x;
+        case 'add': return x + y;
+        case 'subtract': return x - y;
+        case 'multiply': return x * y;
+        case 'divide': return x / y;
+        default: return undefined;
+      }
+    }
+    default: return undefined;
+  }
+}
+
 /**
  * JavaScript source for a checked tree. `slot(name)` gives the array index of a symbol; the code
  * reads only `v[...]` and `F.<whitelisted name>`.
@@ -200,7 +233,16 @@ export function toJs(node: MathNode, slots: ReadonlyMap<string, number>): string
         if (fn === 'unaryPlus') return `(+${args[0]})`;
         if (fn === 'not') return `(+!${args[0]})`;
         const op = BINARY[fn];
-        if (fn === 'pow') return `F.pow(${args[0]}, ${args[1]})`;
+        if (fn === 'pow') {
+          // Constant exponents the hot loop meets most, as hand-written code would have them: 1/2 as sqrt, 1/3 as
+          // cbrt for a positive base (both correctly rounded, closer to the true root than pow), 2 as a product.
+          // Other exponents keep Math.pow, and so does a base ≤ 0 under 1/3 (NaN for a negative one, as before).
+          const e = constantValue(n.args![1]);
+          if (e === 0.5) return `F.sqrt(${args[0]})`;
+          if (e === 1 / 3) return `F.cbrtp(${args[0]})`;
+          if (e === 2) return `F.sq(${args[0]})`;
+          return `F.pow(${args[0]}, ${args[1]})`;
+        }
         // Comparisons yield 1 or 0 so that every value in the evaluator stays a number.
         return op.bool ? `(+(${args[0]} ${op.js} ${args[1]}))` : `(${args[0]} ${op.js} ${args[1]})`;
       }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkExpression, ExpressionError, toJs, toTex } from '@/lib/engine/expressions';
+import { checkExpression, ExpressionError, FUNCTION_IMPLS, toJs, toTex } from '@/lib/engine/expressions';
 import { compileDefinition } from '@/lib/engine/compile';
 import type { Definition } from '@/lib/engine/types';
 
@@ -55,7 +55,32 @@ describe('safe expression language', () => {
   it('generates code that reads only slots and whitelisted functions', () => {
     const slots = new Map([['Re_D', 0], ['Pr', 1], ['x', 2], ['y', 3]]);
     const js = toJs(checkExpression('sqrt(Re_D) * Pr^(1/3) + log10(x) - exp(-y)', declared).node, slots);
-    expect(js.replace(/v\[\d+\]|F\.(sqrt|log10|exp|pow)|[\d.()+\-*/,\s]/g, '')).toBe('');
+    const calls = [...js.matchAll(/F\.(\w+)\(/g)].map((m) => m[1]);
+    expect(calls.every((name) => Object.hasOwn(FUNCTION_IMPLS, name))).toBe(true);
+    expect(js.replace(/v\[\d+\]|F\.\w+\(|[\d.()+\-*/,\s]/g, '')).toBe('');
+  });
+
+  it('writes constant square and cube roots as sqrt and cbrt without changing what a negative base means', () => {
+    const def = (expression: string): Definition => ({
+      schemaVersion: 1, title: 'Roots', summary: 'constant roots', category: 'friction', situation: 'roots',
+      inputs: [{ symbol: 'x', name: 'x', unit: '1' }], outputs: [{ symbol: 'y', name: 'y', unit: '1', expression }],
+      references: [{ citation: 'IEEE 754-2019, sqrt and rootn' }],
+    });
+    const y = (expression: string, x: number) => compileDefinition(def(expression)).runMany(Float64Array.of(x), 1);
+    for (const x of [1e-300, 2, 3.7, 1e5, 8e150]) {
+      // IEEE 754 sqrt and cbrt are correctly rounded (common practice); Math.pow is within an ulp or so of the same root.
+      expect(y('x^(1/2)', x).outputs[0]).toBe(Math.sqrt(x));
+      expect(y('x^0.5', x).outputs[0]).toBe(Math.sqrt(x));
+      expect(y('x^(1/3)', x).outputs[0]).toBe(Math.cbrt(x));
+      // Math.pow(x, 1/3) takes the double nearest a third, 1/3 − 1.85e-17, so it differs from the root by
+      // 1.85e-17·|ln x| relative, plus rounding.
+      expect(Math.abs(y('x^(1/3)', x).outputs[0] / Math.pow(x, 1 / 3) - 1)).toBeLessThan(1.9e-17 * Math.abs(Math.log(x)) + 5e-16);
+      expect(y('x^2', x).outputs[0]).toBe(x * x);
+    }
+    // A negative base under 1/3 stays outside the real numbers the engine answers in, as Math.pow has it.
+    const negative = y('x^(1/3)', -8);
+    expect(negative.errors.get(0)?.code).toBe('not-finite');
+    expect(y('x^(1/2)', -4).errors.get(0)?.code).toBe('not-finite');
   });
 
   it('typesets the trade\'s symbols for KaTeX', () => {
@@ -81,7 +106,16 @@ describe('safe expression language', () => {
           outputs: [{ symbol: 'out', name: 'out', unit: '1', expression: src }], references: [{ citation: 'fuzz test' }],
         };
         const c = compileDefinition(def);
-        try { c.run([0.3, 2, 1e4, 0.7]); } catch (err) { expect((err as Error).name).toBe('EvaluationError'); }
+        // The one-row path and the table path are generated separately: they must agree on every outcome.
+        const many = c.runMany(Float64Array.of(0.3, 2, 1e4, 0.7), 1);
+        try {
+          const one = c.run([0.3, 2, 1e4, 0.7]);
+          expect(Object.is(one.outputs.out, many.outputs[0])).toBe(true);
+          expect(many.warnings.get(0) ?? []).toEqual(one.warnings);
+        } catch (err) {
+          expect((err as Error).name).toBe('EvaluationError');
+          expect(many.errors.get(0)?.code).toBe((err as { code: string }).code);
+        }
         expect(checked.symbols.every((s) => declared.has(s))).toBe(true);
         accepted++;
       } catch (err) {
