@@ -26,10 +26,11 @@ export class Notification extends Model<InferAttributes<Notification>, InferCrea
   declare body: string;
   declare kind: string;
   declare versionId: number | null;
-  declare status: 'pending' | 'sent' | 'failed';
+  declare status: 'pending' | 'sending' | 'sent' | 'failed';
   declare error: string | null;
   declare createdAt: CreationOptional<Date>;
   declare sentAt: Date | null;
+  declare claimedAt: CreationOptional<Date | null>;
 }
 
 export class ApiToken extends Model<InferAttributes<ApiToken>, InferCreationAttributes<ApiToken>> {
@@ -76,6 +77,7 @@ export function initRecords(sequelize: Sequelize) {
       error: { type: DataTypes.TEXT, allowNull: true },
       createdAt: DataTypes.DATE(3),
       sentAt: { type: DataTypes.DATE(3), allowNull: true },
+      claimedAt: { type: DataTypes.DATE(3), allowNull: true },
     },
     { sequelize, tableName: 'notifications', underscored: true, updatedAt: false },
   );

@@ -2,7 +2,7 @@ import 'server-only';
 import { NextResponse, type NextRequest } from 'next/server';
 import { getServerSession } from 'next-auth';
 import { z, type ZodType } from 'zod';
-import { ConnectionAcquireTimeoutError, ConnectionError, DatabaseError } from 'sequelize';
+import { isConcurrentChange, isDatabaseUnavailable } from '@/lib/db/errors';
 import { authOptions } from '@/lib/auth/options';
 import { findUserById, type AuthUser } from '@/lib/auth/users';
 import { resolveApiToken, type TokenScope } from '@/lib/api/tokens';
@@ -38,16 +38,6 @@ export function zodIssues(error: z.ZodError) {
   return error.issues.map((i) => ({ path: i.path.join('.') || '(body)', message: i.message }));
 }
 
-/** A lost or refused database connection (not a bad query). */
-export function isDatabaseUnavailable(err: unknown): boolean {
-  if (err instanceof ConnectionError || err instanceof ConnectionAcquireTimeoutError) return true;
-  if (err instanceof DatabaseError) {
-    const original = (err as DatabaseError & { original?: { code?: string; message?: string } }).original;
-    return /ER_SOCKET_UNEXPECTED_CLOSE|ECONNRESET|ECONNREFUSED|ER_CONNECTION|ER_GET_CONNECTION_TIMEOUT|EPIPE/.test(`${original?.code ?? ''} ${original?.message ?? ''}`);
-  }
-  return false;
-}
-
 function errorResponse(err: unknown): Response {
   if (err instanceof AppError) {
     const status = statusOf(err.code);
@@ -57,6 +47,10 @@ function errorResponse(err: unknown): Response {
   // A unique index caught a race the service's own check could not see (two requests at once).
   if (err instanceof Error && err.name === 'SequelizeUniqueConstraintError') {
     return NextResponse.json({ error: { code: 'conflict:duplicate', message: 'Someone else just created the same thing; reload and try again.' } }, { status: 409 });
+  }
+  // A simultaneous change won (deadlock, lock wait, a Galera certification conflict): nothing was kept; retry.
+  if (isConcurrentChange(err)) {
+    return NextResponse.json({ error: { code: 'unavailable:concurrent-change', message: 'A simultaneous change to the same records came first; nothing of this request was kept. Retry it.' } }, { status: 503, headers: { 'Retry-After': '1', 'cache-control': 'no-store' } });
   }
   // The database is down or unreachable: say so, and let the client retry; the pool reconnects by itself.
   if (isDatabaseUnavailable(err)) {
@@ -148,6 +142,14 @@ function assertSameOrigin(req: NextRequest, hasBody: boolean) {
 export function route<Q = undefined, B = undefined, P = undefined>(key: RouteKey, spec: Spec<Q, B, P>, handler: Handler<Q, B, P>) {
   const access: AccessRule = ACCESS[key];
   return async (req: NextRequest, context: { params: Promise<Record<string, string>> }) => {
+    const started = performance.now();
+    const answer = await handle(req, context);
+    // Server-Timing: the handler's own time, for browsers' developer tools and the benchmark (npm run bench:api).
+    try { answer.headers.set('server-timing', `app;dur=${(performance.now() - started).toFixed(2)}`); } catch { /* immutable headers (a redirect): no timing */ }
+    return answer;
+  };
+
+  async function handle(req: NextRequest, context: { params: Promise<Record<string, string>> }): Promise<Response> {
     try {
       const caller = await identify(req);
       authorize(caller, access);
@@ -167,5 +169,5 @@ export function route<Q = undefined, B = undefined, P = undefined>(key: RouteKey
     } catch (err) {
       return errorResponse(err);
     }
-  };
+  }
 }

@@ -46,20 +46,31 @@ export async function enqueueMail({ transaction, messages }: { transaction: Tran
   })), { transaction });
 }
 
-/** Sends every pending (or earlier failed) message over SMTP; failures stay in the outbox with the error. */
+/** A claim older than this belongs to a delivery that died mid-send; the message may be taken again. */
+const STALE_CLAIM_MS = 10 * 60_000;
+
+/**
+ * Sends every pending (or earlier failed) message over SMTP; failures stay in the outbox with the error. Each message
+ * is claimed first with a conditional UPDATE, so deliveries running at once (two approvals committing together, two
+ * app instances) send it exactly once between them.
+ */
 export async function deliverPendingMail(): Promise<{ sent: number; failed: number }> {
   const { Notification } = db();
-  const pending = await Notification.findAll({ where: { status: { [Op.in]: ['pending', 'failed'] } }, order: [['id', 'ASC']], limit: 200 });
+  const stale = () => new Date(Date.now() - STALE_CLAIM_MS);
+  const open = () => ({ [Op.or]: [{ status: { [Op.in]: ['pending', 'failed'] } }, { status: 'sending', claimedAt: { [Op.lt]: stale() } }] });
+  const pending = await Notification.findAll({ where: open(), order: [['id', 'ASC']], limit: 200 });
   let sent = 0;
   let failed = 0;
   const from = process.env.SMTP_FROM ?? 'Correlary <no-reply@correlary.local>';
   const deliver = async (n: (typeof pending)[number]) => {
+    const [claimed] = await Notification.update({ status: 'sending', claimedAt: new Date() }, { where: { id: n.id, ...open() } });
+    if (claimed !== 1) return; // another delivery has it
     try {
       await transport().sendMail({ from, to: n.toEmail, subject: n.subject, text: n.body });
-      await n.update({ status: 'sent', sentAt: new Date(), error: null });
+      await Notification.update({ status: 'sent', sentAt: new Date(), error: null }, { where: { id: n.id } });
       sent++;
     } catch (err) {
-      await n.update({ status: 'failed', error: (err as Error).message.slice(0, 2000) });
+      await Notification.update({ status: 'failed', error: (err as Error).message.slice(0, 2000) }, { where: { id: n.id } });
       failed++;
     }
   };
