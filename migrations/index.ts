@@ -6,6 +6,8 @@ import * as calculations from './20261202000100-templates-projects-calculations'
 import * as throttle from './20261202000200-sign-in-throttle-and-session-versions';
 import * as evidence from './20261202000300-evidence-policy';
 import * as webhooks from './20261203000100-webhooks';
+import * as librarySearch from './20261204000100-library-search-index';
+import * as mailClaims from './20261204000200-mail-claims';
 
 export interface Migration {
   name: string;
@@ -14,4 +16,4 @@ export interface Migration {
 }
 
 /** Every migration in order. Add new files here; the name is what the tracking table records. */
-export const migrations: Migration[] = [usersAndRoles, correlations, apiTokens, calculations, throttle, evidence, webhooks];
+export const migrations: Migration[] = [usersAndRoles, correlations, apiTokens, calculations, throttle, evidence, webhooks, librarySearch, mailClaims];

@@ -18,6 +18,8 @@ export DB_HOST="${DB_HOST:-127.0.0.1}"
 export DB_PORT="${DB_PORT:-3307}"
 export DB_NAME="${DB_NAME:-correlary}"
 export DB_TEST_NAME="${DB_TEST_NAME:-correlary_test}"
+# The API benchmark's own database (demo data plus thousands of generated library entries).
+export DB_BENCH_NAME="${DB_BENCH_NAME:-correlary_bench}"
 export DB_USER="${DB_USER:-correlary}"
 export SMTP_HOST="${SMTP_HOST:-127.0.0.1}"
 export SMTP_PORT="${SMTP_PORT:-2525}"

@@ -4,7 +4,7 @@ import { db, type Role } from '@/models';
 import { AppError } from '@/lib/http/errors';
 import { appendAuditEvent } from '@/lib/audit/log';
 import { userLabels } from '@/lib/auth/labels';
-import { freshCache } from '@/lib/cache/fresh';
+import { freshLoader } from '@/lib/cache/fresh';
 
 /** read: look up; evaluate: evaluate and run (rate-limited); write: author drafts and save calculations. */
 export const TOKEN_SCOPES = ['read', 'evaluate', 'write'] as const;
@@ -58,7 +58,12 @@ interface TokenRow {
   email: string; name: string; is_active: number; roles: string | null;
 }
 /** Token rows by hash, at most FRESHNESS_MS old (lib/cache/fresh.ts); unknown hashes are remembered too (`none`). */
-const tokenCache = freshCache<TokenRow | { none: true }>(20_000);
+const tokenCache = freshLoader<TokenRow | { none: true }>(async (hash) => {
+  const [found] = await db().sequelize.query<TokenRow>(`SELECT t.id, t.user_id, t.scopes, t.expires_at, t.revoked_at, t.last_used_at, u.email, u.name, u.is_active,
+      (SELECT GROUP_CONCAT(r.role ORDER BY r.role) FROM user_roles r WHERE r.user_id = u.id) AS roles
+    FROM api_tokens t JOIN users u ON u.id = t.user_id WHERE t.token_hash = ?`, { replacements: [hash], type: QueryTypes.SELECT });
+  return found ?? { none: true };
+}, 20_000);
 
 /** This instance forgets a token at once when it revokes it; the others within FRESHNESS_MS. */
 export function forgetCachedToken(tokenId: number) {
@@ -77,16 +82,8 @@ export function forgetCachedTokensOfUser(userId: number) {
  * every request against the clock.
  */
 export async function resolveApiToken(plain: string) {
-  const { sequelize, ApiToken } = db();
-  const hash = hashToken(plain);
-  let cached = tokenCache.get(hash);
-  if (!cached) {
-    const [found] = await sequelize.query<TokenRow>(`SELECT t.id, t.user_id, t.scopes, t.expires_at, t.revoked_at, t.last_used_at, u.email, u.name, u.is_active,
-        (SELECT GROUP_CONCAT(r.role ORDER BY r.role) FROM user_roles r WHERE r.user_id = u.id) AS roles
-      FROM api_tokens t JOIN users u ON u.id = t.user_id WHERE t.token_hash = ?`, { replacements: [hash], type: QueryTypes.SELECT });
-    cached = found ?? { none: true };
-    tokenCache.set(hash, cached);
-  }
+  const { ApiToken } = db();
+  const cached = (await tokenCache.fetch(hashToken(plain)))!;
   const row = 'none' in cached ? undefined : cached;
   if (!row) throw new AppError('unauthenticated:token', 'The API token is not valid.');
   if (row.revoked_at) throw new AppError('unauthenticated:token-revoked', 'The API token was revoked.');

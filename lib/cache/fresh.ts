@@ -7,6 +7,13 @@ import { LRUCache } from 'lru-cache';
  */
 export const FRESHNESS_MS = Math.max(0, Number(process.env.FRESHNESS_MS ?? 1000));
 
-export function freshCache<V extends {}>(max = 10_000): LRUCache<string, V> {
-  return new LRUCache<string, V>({ max, ttl: Math.max(1, FRESHNESS_MS), ttlAutopurge: false, allowStale: false });
+/**
+ * A cache that loads what it misses with `load`, once: requests that miss the same key while it loads wait for
+ * that one load instead of each querying the database (no stampede when a busy entry expires).
+ */
+export function freshLoader<V extends {}, C = unknown>(load: (key: string, context: C) => Promise<V>, max = 10_000): LRUCache<string, V, C> {
+  return new LRUCache<string, V, C>({
+    max, ttl: Math.max(1, FRESHNESS_MS), ttlAutopurge: false, allowStale: false,
+    fetchMethod: (key, _stale, { context }) => load(key, context),
+  });
 }

@@ -37,6 +37,22 @@ export async function verifyFrozen(v: FrozenContent, slug: string): Promise<void
   const text = v.definitionText;
   const seen = verified.get(v.id);
   if (seen && seen.hash === v.contentHash && seen.text === text && Date.now() - seen.at < RECHECK_MS) return;
+  // Requests that find the same check due share it (a busy version does not send every request to the database).
+  const key = `${v.id}|${v.contentHash}`;
+  let check = checking.get(key);
+  if (!check || checkingText.get(key) !== text) {
+    check = recheck(v, slug).finally(() => { if (checking.get(key) === check) { checking.delete(key); checkingText.delete(key); } });
+    checking.set(key, check);
+    checkingText.set(key, text);
+  }
+  return check;
+}
+
+const checking = new Map<string, Promise<void>>();
+const checkingText = new Map<string, unknown>();
+
+async function recheck(v: FrozenContent, slug: string): Promise<void> {
+  const text = v.definitionText;
   const definition = typeof text === 'string' ? JSON.parse(text) : text;
   const actual = contentHash(definition, await checkCasesOfVersion(v.id));
   if (actual !== v.contentHash) {

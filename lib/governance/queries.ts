@@ -23,6 +23,16 @@ export interface ListQuery {
   pageSize: number;
 }
 
+/**
+ * A search word as a full-text term: each of its letter-and-digit runs must start a word of the definition
+ * ("re_d" → +re_d*, "k-epsilon" → +k* +epsilon*). Runs shorter than the index's smallest word (3 by default) are
+ * left to the title, slug and tag match. Boolean-mode operators cannot pass: only letters, digits and _ remain.
+ */
+function fullTextTerm(word: string): string | null {
+  const runs = word.split(/[^\p{L}\p{N}_]+/u).filter((r) => r.length >= 3);
+  return runs.length ? runs.map((r) => `+${r}*`).join(' ') : null;
+}
+
 const SORT_COLUMN: Record<NonNullable<ListQuery['sort']>, string> = { title: 'c.title', category: 'c.category', updated: 'c.updated_at', slug: 'c.slug' };
 
 /**
@@ -36,13 +46,16 @@ export async function listCorrelations({ actor, query, kind = 'correlation' }: {
   const where: string[] = ['c.kind = :kind', `EXISTS (SELECT 1 FROM correlation_versions v WHERE v.correlation_id = c.id AND ${visible})`];
   const repl: Record<string, unknown> = { me: actor?.id ?? 0, approver: isApprover ? 1 : 0, kind };
   if (query.q) {
-    // Every word must appear somewhere — title, slug, situation, tags, or the approved definition (input and
-    // output names, references): "laminar flat plate average" and "reynolds" find what an engineer means.
+    // Every word must appear somewhere: anywhere in the title, slug, situation or tags, or as the start of a word of
+    // the approved definition (input and output names, references, notes), found through its full-text index
+    // (migrations/20261204000100): "laminar flat plate average" and "reynolds" find what an engineer means.
     const words = query.q.toLowerCase().split(/\s+/).filter(Boolean).slice(0, 8);
     words.forEach((w, i) => {
-      where.push(`(c.title LIKE :q${i} OR c.slug LIKE :q${i} OR c.situation LIKE :q${i} OR c.tags LIKE :q${i}
-        OR EXISTS (SELECT 1 FROM correlation_versions s WHERE s.correlation_id = c.id AND s.status = 'approved' AND s.definition LIKE :q${i}))`);
+      const inDefinition = fullTextTerm(w);
+      where.push(`(c.title LIKE :q${i} OR c.slug LIKE :q${i} OR c.situation LIKE :q${i} OR c.tags LIKE :q${i}${inDefinition ? `
+        OR c.id IN (SELECT s.correlation_id FROM correlation_versions s WHERE s.status = 'approved' AND MATCH (s.definition) AGAINST (:ft${i} IN BOOLEAN MODE))` : ''})`);
       repl[`q${i}`] = `%${w.replace(/[%_\\]/g, (m) => `\\${m}`)}%`;
+      if (inDefinition) repl[`ft${i}`] = inDefinition;
     });
   }
   if (query.category) { where.push('c.category = :category'); repl.category = query.category; }
@@ -57,8 +70,9 @@ export async function listCorrelations({ actor, query, kind = 'correlation' }: {
   }
   const whereSql = where.join(' AND ');
   const order = `${SORT_COLUMN[query.sort ?? 'title']} ${query.dir === 'desc' ? 'DESC' : 'ASC'}, c.id ASC`;
-  const [{ total }] = await sequelize.query<{ total: number }>(`SELECT COUNT(*) AS total FROM correlations c WHERE ${whereSql}`, { replacements: repl, type: QueryTypes.SELECT });
-  const rows = await sequelize.query<{
+  // The count and the page side by side (a window count would make the database build every row, not one page).
+  const counted = sequelize.query<{ total: number }>(`SELECT COUNT(*) AS total FROM correlations c WHERE ${whereSql}`, { replacements: repl, type: QueryTypes.SELECT });
+  const listed = sequelize.query<{
     id: number; slug: string; title: string; category: string; situation: string; tags: string; updated_at: Date;
     approved_version: number | null; approved_definition: string | null; approved_at: Date | null; approved_hash: string | null; approved_grade: string | null; latest_version: number; latest_status: VersionStatus;
   }>(`
@@ -74,6 +88,7 @@ export async function listCorrelations({ actor, query, kind = 'correlation' }: {
     LIMIT :limit OFFSET :offset`, {
     replacements: { ...repl, limit: query.pageSize, offset: (query.page - 1) * query.pageSize }, type: QueryTypes.SELECT,
   });
+  const [[{ total }], rows] = await Promise.all([counted, listed]);
   return {
     items: rows.map((r) => ({
       slug: r.slug, title: r.title, category: r.category, situation: r.situation, tags: JSON.parse(r.tags ?? '[]') as string[],

@@ -4,7 +4,7 @@ import { AppError } from '@/lib/http/errors';
 import type { AuthUser } from '@/lib/auth/users';
 import type { Pin } from '@/lib/engine/template-types';
 import { canSeeVersion } from './access';
-import { freshCache } from '@/lib/cache/fresh';
+import { freshLoader } from '@/lib/cache/fresh';
 
 /** What evaluation needs of a version, read in one plain query (the definition stays text until needed). */
 export interface ServableVersion {
@@ -37,7 +37,14 @@ const NOUN: Record<EntryKind, string> = { correlation: 'correlation', template: 
  * (`forgetServableVersions`). The integrity check still re-hashes what the database held when the entry was read.
  */
 const FROZEN: VersionStatus[] = ['approved', 'superseded', 'withdrawn'];
-const servableCache = freshCache<ServableVersion>(5_000);
+interface Lookup { slug: string; kind: EntryKind; version?: number }
+const servableCache = freshLoader<ServableVersion | { none: true }, Lookup>(async (_key, { slug, kind, version }) => {
+  const [row] = await db().sequelize.query<Row>(`SELECT ${COLUMNS}
+      FROM correlation_versions v JOIN correlations c ON c.id = v.correlation_id
+      WHERE c.slug = ? AND c.kind = ? AND ${version !== undefined ? 'v.version = ?' : "v.status = 'approved'"} LIMIT 1`,
+  { replacements: version !== undefined ? [slug, kind, version] : [slug, kind], type: QueryTypes.SELECT });
+  return row ? toServable(row) : { none: true };
+}, 5_000);
 export function forgetServableVersions() {
   servableCache.clear();
 }
@@ -49,17 +56,10 @@ export function forgetServableVersions() {
  */
 export async function loadServableVersion({ actor, slug, version, kind = 'correlation' }: { actor: AuthUser; slug: string; version?: number; kind?: EntryKind }): Promise<ServableVersion> {
   const key = `${kind}|${slug}|${version ?? 'approved'}`;
-  let found = servableCache.get(key);
-  if (!found) {
-    const { sequelize } = db();
-    const [row] = await sequelize.query<Row>(`SELECT ${COLUMNS}
-        FROM correlation_versions v JOIN correlations c ON c.id = v.correlation_id
-        WHERE c.slug = ? AND c.kind = ? AND ${version !== undefined ? 'v.version = ?' : "v.status = 'approved'"} LIMIT 1`,
-    { replacements: version !== undefined ? [slug, kind, version] : [slug, kind], type: QueryTypes.SELECT });
-    found = row && toServable(row);
-    // Only frozen versions are remembered: a draft changes under its author's hands.
-    if (found && FROZEN.includes(found.status)) servableCache.set(key, found);
-  }
+  const entry = (await servableCache.fetch(key, { context: { slug, kind, version } }))!;
+  const found = 'none' in entry ? undefined : entry;
+  // Only frozen versions are remembered: a draft changes under its author's hands, and a miss may be created.
+  if (!found || !FROZEN.includes(found.status)) servableCache.delete(key);
   if (!found || !canSeeVersion(actor, found)) {
     const { Correlation } = db();
     if (!(await Correlation.findOne({ where: { slug, kind }, attributes: ['id'] }))) throw new AppError(`not_found:${kind}`, `No ${NOUN[kind]} "${slug}".`);
