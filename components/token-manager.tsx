@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { api, ApiError } from '@/lib/client/api';
 import { Field } from '@/components/ui/field';
 import { QueryState } from '@/components/ui/query-state';
+import { CopyButton } from '@/components/ui/copy-button';
 
 interface TokenRow {
   id: number; name: string; prefix: string; scopes: string[]; userEmail: string;
@@ -32,9 +33,11 @@ export function TokenManager({ all = false }: { all?: boolean }) {
     onSuccess: (t) => { setCreated(t.token); setErrors({}); setForm({ ...form, name: '' }); qc.invalidateQueries({ queryKey: ['tokens'] }); },
     onError: (e) => setErrors(e instanceof ApiError ? { ...e.fieldErrors(), form: e.message } : { form: String(e) }),
   });
+  const [confirming, setConfirming] = useState<number | null>(null);
+  const [revoked, setRevoked] = useState<string | null>(null);
   const revoke = useMutation({
-    mutationFn: (id: number) => api(`/api/tokens/${id}`, { method: 'DELETE' }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: ['tokens'] }),
+    mutationFn: (t: TokenRow) => api(`/api/tokens/${t.id}`, { method: 'DELETE' }).then(() => t),
+    onSuccess: (t) => { setConfirming(null); setRevoked(`Token “${t.name}” (${t.prefix}…) is revoked: requests with it are refused within a second.`); qc.invalidateQueries({ queryKey: ['tokens'] }); },
   });
 
   return (
@@ -59,9 +62,14 @@ export function TokenManager({ all = false }: { all?: boolean }) {
       {created && (
         <div role="status" className="rounded border border-caution-line bg-caution-bg p-3 text-sm">
           <p className="font-medium">Copy this token now; it will not be shown again.</p>
-          <code data-testid="new-token" className="mt-1 block break-all rounded bg-paper-raised px-2 py-1">{created}</code>
+          <div className="mt-1 flex items-start gap-2">
+            <code data-testid="new-token" className="block flex-1 break-all rounded bg-paper-raised px-2 py-1">{created}</code>
+            <CopyButton text={created} describe="the new token" />
+          </div>
         </div>
       )}
+      {revoked && <p role="status" className="rounded bg-ok-bg px-3 py-2 text-sm text-ok">{revoked}</p>}
+      {revoke.isError && <p role="alert" className="text-sm text-danger">{revoke.error.message}</p>}
       <QueryState query={tokens}>
         {(data) => data.items.length === 0 ? <p className="text-sm text-ink-faint">No tokens yet.</p> : (
           <table className="table-plain">
@@ -71,7 +79,13 @@ export function TokenManager({ all = false }: { all?: boolean }) {
                 <tr key={t.id} className={t.revokedAt ? 'text-ink-faint line-through' : ''}>
                   <td>{t.name}</td>{all && <td>{t.userEmail}</td>}<td><code>{t.prefix}…</code></td><td>{t.scopes.join(', ')}</td>
                   <td>{fmt(t.expiresAt)}</td><td>{fmt(t.lastUsedAt)}</td>
-                  <td>{t.revokedAt ? 'revoked' : <button type="button" className="btn-quiet" onClick={() => revoke.mutate(t.id)}>Revoke</button>}</td>
+                  <td className="whitespace-nowrap">{t.revokedAt ? 'revoked' : confirming === t.id ? (
+                    <span className="inline-flex flex-wrap items-center gap-1">
+                      <span className="text-xs">Scripts using it stop working.</span>
+                      <button type="button" className="btn-danger px-2 py-1 text-xs" disabled={revoke.isPending} onClick={() => revoke.mutate(t)}>Revoke “{t.name}”</button>
+                      <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => setConfirming(null)}>Keep it</button>
+                    </span>
+                  ) : <button type="button" className="btn-quiet" aria-label={`Revoke the token ${t.name}`} onClick={() => { setRevoked(null); setConfirming(t.id); }}>Revoke…</button>}</td>
                 </tr>
               ))}
             </tbody>

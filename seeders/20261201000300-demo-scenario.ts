@@ -116,7 +116,7 @@ export async function up(): Promise<void> {
     // The engineer's intake-louvre calculation for the TW-7 fan selection was saved with version 1.
     const project = await demoProject();
     await saveCalculation({ actor: engineer, tokenId: null, request: { project: project.id, title: 'TW-7 intake louvre pressure drop at the design air flow', note: 'fan selection, first pass', chain: await louvreChain(), inputs: { u_face: 2.4, b: { value: 18, unit: 'mm' }, sigma: 0.45, T: { value: 35, unit: 'degC' }, p: { value: 99.5, unit: 'kPa' } } } });
-    await withdrawVersion({ actor: approver2, slug, version: 1, reason: 'The rig flow meter was found out of calibration (reads 6 % high); K values of test series 1 are too low. Do not use for TW-7 fan selection.' });
+    await withdrawVersion({ actor: approver2, slug, version: 1, reason: 'The rig flow meter was found out of calibration (reads 6 % high); K values of test series 1 are too low. Do not use for TW-7 fan selection.', password: DEMO_PASSWORD });
     await createDraftVersion({ actor: author, slug, fromVersion: 1 });
     await updateDraft({ actor: author, slug, version: 2, definition: louvre(2.1), checkCases: louvreCases(2.1) });
     await submitVersion({ actor: author, slug, version: 2 });

@@ -32,7 +32,9 @@ export function VersionActions({ detail, user }: { detail: VersionDetail; user: 
   const router = useRouter();
   const qc = useQueryClient();
   const [reason, setReason] = useState('');
+  const [password, setPassword] = useState('');
   const [open, setOpen] = useState(false);
+  const [done, setDone] = useState<string | null>(null);
   const isAuthor = user.roles.includes('author');
   const isApprover = user.roles.includes('approver');
   const newVersion = useMutation({
@@ -40,25 +42,37 @@ export function VersionActions({ detail, user }: { detail: VersionDetail; user: 
     onSuccess: (r) => router.push(`/author/${detail.slug}/${r.version}`),
   });
   const withdraw = useMutation({
-    mutationFn: () => api(`/api/correlations/${detail.slug}/versions/${detail.version}/withdraw`, { body: { reason } }),
-    onSuccess: () => { setOpen(false); qc.invalidateQueries({ queryKey: ['version', detail.slug] }); qc.invalidateQueries({ queryKey: ['correlation', detail.slug] }); },
+    mutationFn: () => api<{ notified: string[] }>(`/api/correlations/${detail.slug}/versions/${detail.version}/withdraw`, { body: { reason, password } }),
+    onSuccess: async (r) => {
+      setOpen(false);
+      setPassword('');
+      setDone(`Version ${detail.version} is withdrawn with your signature. ${r.notified.length ? `${r.notified.length} ${r.notified.length === 1 ? 'person was' : 'people were'} told by e-mail` : 'Nobody had used it'}; saved calculations that used it are flagged.`);
+      await Promise.all([qc.invalidateQueries({ queryKey: ['version', detail.slug] }), qc.invalidateQueries({ queryKey: ['correlation', detail.slug] })]);
+    },
   });
   const uses = useQuery({ queryKey: ['uses', detail.slug, detail.version], enabled: open, queryFn: () => api<Uses>(`/api/correlations/${detail.slug}/versions/${detail.version}/uses`) });
-  const reasonError = withdraw.error instanceof ApiError ? withdraw.error.fieldErrors().reason : undefined;
+  const fieldErrors = withdraw.error instanceof ApiError ? withdraw.error.fieldErrors() : {};
+  const reasonError = fieldErrors.reason;
+  const passwordError = fieldErrors.password;
 
   return (
     <div className="flex flex-wrap items-start gap-2">
       {isAuthor && detail.status === 'draft' && detail.authorId === user.id && <Link href={`/author/${detail.slug}/${detail.version}`} className="btn-primary">Edit this draft</Link>}
       {isAuthor && detail.status !== 'draft' && <button type="button" className="btn-quiet" disabled={newVersion.isPending} onClick={() => newVersion.mutate()}>Start a new version from v{detail.version}</button>}
       {isApprover && detail.status === 'in_review' && detail.authorId !== user.id && <Link href={`/review/${detail.slug}/${detail.version}`} className="btn-primary">Review this version</Link>}
-      {isApprover && detail.status === 'approved' && !open && <button type="button" className="btn-quiet text-danger" onClick={() => setOpen(true)}>Withdraw…</button>}
+      {isApprover && detail.status === 'approved' && !open && <button type="button" className="btn-quiet text-danger" onClick={() => { setDone(null); setOpen(true); }}>Withdraw…</button>}
       {newVersion.isError && <p role="alert" className="text-sm text-danger">{newVersion.error.message}</p>}
+      {done && <p role="status" className="w-full rounded bg-ok-bg px-3 py-2 text-sm text-ok">{done}</p>}
       {open && (
         <form className="w-full max-w-xl space-y-2 rounded border border-danger/30 bg-danger-bg p-3" onSubmit={(e) => { e.preventDefault(); withdraw.mutate(); }}>
           <UsesSummary uses={uses.data} loading={uses.isPending} />
           <label htmlFor="withdraw-reason" className="block text-sm font-medium">Reason for withdrawal (sent to everyone who used this version)</label>
-          <textarea id="withdraw-reason" className="field-input" rows={3} value={reason} aria-invalid={Boolean(reasonError)} onChange={(e) => setReason(e.target.value)} />
-          {(reasonError || (withdraw.isError && !reasonError)) && <p className="text-xs text-danger">{reasonError ?? withdraw.error?.message}</p>}
+          <textarea id="withdraw-reason" className="field-input" rows={3} value={reason} aria-invalid={Boolean(reasonError)} aria-describedby={reasonError ? 'withdraw-reason-error' : undefined} onChange={(e) => setReason(e.target.value)} />
+          {reasonError && <p id="withdraw-reason-error" className="text-xs text-danger">{reasonError}</p>}
+          <label htmlFor="withdraw-password" className="block text-sm font-medium">Your password, to sign the withdrawal</label>
+          <input id="withdraw-password" type="password" autoComplete="current-password" className="field-input max-w-xs" value={password} aria-invalid={Boolean(passwordError)} aria-describedby={passwordError ? 'withdraw-password-error' : undefined} onChange={(e) => setPassword(e.target.value)} />
+          {passwordError && <p id="withdraw-password-error" className="text-xs text-danger">{passwordError}</p>}
+          {withdraw.isError && !reasonError && !passwordError && <p role="alert" className="text-xs text-danger">{withdraw.error?.message}</p>}
           <div className="flex gap-2"><button className="btn-danger" disabled={withdraw.isPending}>Withdraw version {detail.version}</button><button type="button" className="btn-quiet" onClick={() => setOpen(false)}>Cancel</button></div>
         </form>
       )}

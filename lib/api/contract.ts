@@ -124,7 +124,10 @@ export const evidencePolicyBody = z.object({
   minimumIndependent: z.number().int().min(0).max(50),
   minimumKinds: z.number().int().min(0).max(8),
 }).strict();
-export const withdrawBody = z.object({ reason: z.string().max(2000) }).strict();
+export const withdrawBody = z.object({
+  reason: z.string().max(2000),
+  password: z.string().max(128).optional().describe('your current password: a withdrawal is signed like an approval'),
+}).strict();
 export const commentBody = z.object({ body: z.string().max(5000) }).strict();
 export const compareBody = z.object({
   items: z.array(z.object({ slug: slugParam, version: z.number().int().positive().optional() })).min(1).max(8),

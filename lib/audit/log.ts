@@ -1,4 +1,4 @@
-import { Op, QueryTypes, type Transaction } from 'sequelize';
+import { Op, QueryTypes, type Transaction, type WhereOptions } from 'sequelize';
 import { db } from '@/models';
 import { userLabels } from '@/lib/auth/labels';
 import { auditEventHash, GENESIS_HASH, type AuditEventContent } from './hash';
@@ -74,15 +74,45 @@ export async function verifyAuditChain(): Promise<ChainStatus> {
   return { intact: true, events: count };
 }
 
-/** Newest first, with actor names. */
-export async function listAuditEvents({ page, pageSize }: { page: number; pageSize: number }) {
+export interface AuditFilter {
+  /** Action or its start: "version." finds every version event. */
+  action?: string;
+  /** The actor's e-mail (exact), or "system". */
+  actor?: string;
+  /** Part of the subject id: a slug, "slug@2", a calculation or user id. */
+  subject?: string;
+  from?: Date;
+  to?: Date;
+}
+
+async function whereOf(filter: AuditFilter): Promise<WhereOptions | null> {
+  const where: Record<string | symbol, unknown> = {};
+  if (filter.action) where.action = { [Op.like]: `${filter.action.replace(/[%_\\]/g, '\\$&')}%` };
+  if (filter.subject) where.entityId = { [Op.like]: `%${filter.subject.replace(/[%_\\]/g, '\\$&')}%` };
+  if (filter.actor) {
+    if (filter.actor === 'system') where.actorId = null;
+    else {
+      const user = await db().User.findOne({ where: { email: filter.actor.toLowerCase() }, attributes: ['id'] });
+      if (!user) return null;
+      where.actorId = user.id;
+    }
+  }
+  if (filter.from || filter.to) where.at = { ...(filter.from ? { [Op.gte]: filter.from } : {}), ...(filter.to ? { [Op.lt]: filter.to } : {}) };
+  return where as WhereOptions;
+}
+
+/** Newest first, with actor names; filtered by action, actor, subject and time. */
+export async function listAuditEvents({ page, pageSize, filter = {} }: { page: number; pageSize: number; filter?: AuditFilter }) {
   const { AuditEvent } = db();
-  const { rows, count } = await AuditEvent.findAndCountAll({ order: [['id', 'DESC']], limit: pageSize, offset: (page - 1) * pageSize });
+  const where = await whereOf(filter);
+  if (!where) return { items: [], total: 0, page, pageSize };
+  const { rows, count } = await AuditEvent.findAndCountAll({ where, order: [['id', 'DESC']], limit: pageSize, offset: (page - 1) * pageSize });
   const names = await userLabels({ ids: rows.map((e) => e.actorId), field: 'email' });
   return {
     items: rows.map((e) => ({
       id: e.id, at: e.at, actor: e.actorId ? names.get(e.actorId) ?? `user ${e.actorId}` : 'system', action: e.action,
-      entity: `${e.entityType} ${e.entityId}`, beforeHash: e.beforeHash, afterHash: e.afterHash, details: e.details, hash: e.hash,
+      entity: `${e.entityType} ${e.entityId}`, entityType: e.entityType, entityId: e.entityId,
+      beforeHash: e.beforeHash, afterHash: e.afterHash, details: e.details, hash: e.hash,
     })),
     total: count, page, pageSize,
   };

@@ -255,19 +255,25 @@ export async function submitVersion({ actor, slug, version }: { actor: AuthUser;
  * password again and records the meaning of the signature; it supersedes the previously approved
  * version in the same transaction. Row locks make concurrent decisions land exactly once.
  */
+/**
+ * A signature (approval, withdrawal) needs the signer's current password. Wrong passwords are throttled like
+ * sign-in: a stolen session cannot guess its way to a signature.
+ */
+async function assertSignature(actor: AuthUser, password: string | undefined) {
+  const me = await findUserById({ id: actor.id });
+  if (!password) throw new AppError('invalid:password', 'Enter your current password: the signature needs it.', { issues: [{ path: 'password', message: 'Required to sign' }] });
+  if (!me || !(await throttledCheck(personBuckets('sign-off', actor.id), 'sign-off', () => verifyPassword(password, me.passwordHash)))) {
+    throw new AppError('invalid:password', 'The password is not correct; the signature needs your current password.', { issues: [{ path: 'password', message: 'Not correct' }] });
+  }
+}
+
 export async function decideVersion({ actor, slug, version, decision, comment, password, waiver }: {
   actor: AuthUser; slug: string; version: number; decision: 'approve' | 'return'; comment: string; password?: string;
   /** Why the approver signs a version whose evidence is below the policy (required then, at least 20 characters). */
   waiver?: string;
 }) {
   requireRole(actor, 'approver');
-  if (decision === 'approve') {
-    const me = await findUserById({ id: actor.id });
-    // Wrong passwords at sign-off are throttled like sign-in: a stolen session cannot guess its way to a signature.
-    if (!me || !password || !(await throttledCheck(personBuckets('sign-off', actor.id), 'sign-off', () => verifyPassword(password, me.passwordHash)))) {
-      throw new AppError('invalid:password', 'The password is not correct; the signature needs your current password.', { issues: [{ path: 'password', message: 'Not correct' }] });
-    }
-  }
+  if (decision === 'approve') await assertSignature(actor, password);
   if (decision === 'return' && !comment.trim()) {
     throw new AppError('invalid:comment', 'Say what the author should change.', { issues: [{ path: 'comment', message: 'A comment is required when returning a version' }] });
   }
@@ -332,9 +338,11 @@ export async function decideVersion({ actor, slug, version, decision, comment, p
  * Withdraws an approved version with a reason. It stays readable but is never served as latest;
  * everyone who used it (API usage records, saved calculations) is told by e-mail.
  */
-export async function withdrawVersion({ actor, slug, version, reason }: { actor: AuthUser; slug: string; version: number; reason: string }) {
+export async function withdrawVersion({ actor, slug, version, reason, password }: { actor: AuthUser; slug: string; version: number; reason: string; password?: string }) {
   requireRole(actor, 'approver');
   if (reason.trim().length < 10) throw new AppError('invalid:reason', 'Give the reason for withdrawal (at least 10 characters).', { issues: [{ path: 'reason', message: 'At least 10 characters' }] });
+  // A withdrawal is signed like an approval: the approver's current password, throttled the same way.
+  await assertSignature(actor, password);
   const { sequelize, SignOff, User } = db();
   const outcome = await sequelize.transaction(async (transaction) => {
     const c = await lockedCorrelation(slug, transaction);

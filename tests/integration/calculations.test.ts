@@ -210,7 +210,7 @@ describe('calculations: templates, saved records, parametric runs and withdrawal
     const uses = await call(`/api/correlations/${slug}/versions/2/uses`, { cookie: approver2 });
     expect(uses.body.calculations.map((c: { id: number }) => c.id)).toEqual([b.body.id]);
     expect((await call(`/api/correlations/${slug}/versions/2/uses`, { cookie: engineer.cookie })).status).toBe(403);
-    const w = await call(`/api/correlations/${slug}/versions/2/withdraw`, { cookie: approver2, body: { reason: 'Coefficient typed from the wrong table row.' } });
+    const w = await call(`/api/correlations/${slug}/versions/2/withdraw`, { cookie: approver2, body: { reason: 'Coefficient typed from the wrong table row.', password: DEMO_PASSWORD } });
     expect(w.status).toBe(200);
     expect(w.body.notified).toContain(engineer.user.email);
     expect((await call(`/api/calculations/${b.body.id}`, { cookie: engineer.cookie })).body.flags).toEqual([expect.objectContaining({ slug, version: 2, reason: 'Coefficient typed from the wrong table row.' })]);

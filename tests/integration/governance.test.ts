@@ -160,7 +160,14 @@ describe('governance life cycle over HTTP against MariaDB', () => {
     expect(used.body.version).toBe(authorsDraft);
     const short = await call(`/api/correlations/${slug}/versions/${authorsDraft}/withdraw`, { cookie: approver2, body: { reason: 'bad' } });
     expect(short.body.error.code).toBe('invalid:reason');
-    const w = await call(`/api/correlations/${slug}/versions/${authorsDraft}/withdraw`, { cookie: approver2, body: { reason: 'Coefficient typed with an extra digit; use version 1 values.' } });
+    // A withdrawal is signed like an approval: no password, or a wrong one, and nothing changes.
+    const unsigned = await call(`/api/correlations/${slug}/versions/${authorsDraft}/withdraw`, { cookie: approver2, body: { reason: 'Coefficient typed with an extra digit; use version 1 values.' } });
+    expect(unsigned.status).toBe(422);
+    expect(unsigned.body.error.details.issues[0].path).toBe('password');
+    const wrong = await call(`/api/correlations/${slug}/versions/${authorsDraft}/withdraw`, { cookie: approver2, body: { reason: 'Coefficient typed with an extra digit; use version 1 values.', password: 'not-my-password' } });
+    expect(wrong.body.error.code).toBe('invalid:password');
+    expect((await call(`/api/correlations/${slug}/versions/${authorsDraft}`, { cookie: approver2 })).body.status).toBe('approved');
+    const w = await call(`/api/correlations/${slug}/versions/${authorsDraft}/withdraw`, { cookie: approver2, body: { reason: 'Coefficient typed with an extra digit; use version 1 values.', password: DEMO_PASSWORD } });
     expect(w.status).toBe(200);
     expect(w.body.notified).toContain('engineer@demo.example');
     expect(mailTo('engineer@demo.example').some((m) => m.subject.includes('Withdrawn') && m.text.includes('extra digit'))).toBe(true);
@@ -207,7 +214,7 @@ describe('governance life cycle over HTTP against MariaDB', () => {
       edit: { path: `/api/correlations/${target}/versions/1`, method: 'PATCH', body: { checkCases: plateCases() }, allowed: ['author'] },
       submit: { path: `/api/correlations/${target}/versions/1/submit`, method: 'POST', allowed: ['author'] },
       decide: { path: `/api/correlations/${target}/versions/1/decision`, body: { decision: 'return', comment: 'no' }, allowed: ['approver'] },
-      withdraw: { path: `/api/correlations/${target}/versions/1/withdraw`, body: { reason: 'a reason long enough' }, allowed: ['approver'] },
+      withdraw: { path: `/api/correlations/${target}/versions/1/withdraw`, body: { reason: 'a reason long enough', password: DEMO_PASSWORD }, allowed: ['approver'] },
       validate: { path: `/api/correlations/${target}/versions/1/validate`, method: 'POST', allowed: ['author', 'approver'] },
     };
     for (const [name, a] of Object.entries(actions)) {

@@ -147,7 +147,7 @@ describe('webhooks: signed deliveries when a followed version changes, retried, 
     await call(`/api/correlations/${slug}/versions/2`, { cookie: author.cookie, method: 'PATCH', body: { definition: plateDefinition(0.333), checkCases: plateCases(0.333) } });
     expect((await call(`/api/correlations/${slug}/versions/2/submit`, { cookie: author.cookie, method: 'POST' })).status).toBe(200);
     expect((await call(`/api/correlations/${slug}/versions/2/decision`, { cookie: approver, body: { decision: 'approve', waiver: FIXTURE_WAIVER, comment: 'Reviewed.', password: DEMO_PASSWORD } })).status).toBe(200);
-    expect((await call(`/api/correlations/${slug}/versions/2/withdraw`, { cookie: approver, body: { reason: 'Coefficient not traceable to the source.' } })).status).toBe(200);
+    expect((await call(`/api/correlations/${slug}/versions/2/withdraw`, { cookie: approver, body: { reason: 'Coefficient not traceable to the source.', password: DEMO_PASSWORD } })).status).toBe(200);
     const byPath = (path: string, event: string) => rx.got.filter((g) => g.path === path && g.headers['correlary-webhook-event'] === event);
     expect(await until(() => rx.got.filter((g) => g.headers['correlary-webhook-event'] === 'version.withdrawn').length >= 2)).toBe(true);
     expect(byPath('/hooks/library', 'version.superseded')).toHaveLength(1);

@@ -73,7 +73,7 @@ describe('two app instances behind one database keep every rule', () => {
     expect((await call(`/api/correlations/${slug}/versions/1/decision`, { cookie: approver, body: { decision: 'approve', waiver: FIXTURE_WAIVER, comment: 'ok', password: DEMO_PASSWORD } })).status).toBe(200);
     const body = { inputs: { Re_x: 1e4, Pr: 0.7 } };
     expect((await two(`/api/correlations/${slug}/evaluate`, { token, body })).status).toBe(200);
-    expect((await one(`/api/correlations/${slug}/versions/1/withdraw`, { cookie: approver, body: { reason: 'withdrawn in the two-instance test' } })).status).toBe(200);
+    expect((await one(`/api/correlations/${slug}/versions/1/withdraw`, { cookie: approver, body: { reason: 'withdrawn in the two-instance test', password: DEMO_PASSWORD } })).status).toBe(200);
     const withdrawnAt = Date.now();
     // Within the bound the other instance may still answer from its cache; after it, never. Asked every 100 ms so
     // the token stays well inside this instance's LIMIT requests a minute.

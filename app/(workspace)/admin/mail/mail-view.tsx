@@ -11,7 +11,7 @@ export function MailView() {
   return (
     <section className="panel space-y-3">
       <h1 className="text-lg font-semibold">Sent mail</h1>
-      <p className="text-sm text-ink-soft">The outbox of notifications (newest 200). In development and tests they go to the local fake SMTP server; production points SMTP_* at a real relay.</p>
+      <p className="text-sm text-ink-soft">Every notification Correlary has sent or still has to send, newest first (the last 200): review requests, decisions, withdrawals and the work they affect. Open a subject to read the message as it was sent. A message that could not be delivered is tried again after the next change.</p>
       <QueryState query={q}>
         {(d) => (
           <table className="table-plain">
@@ -21,7 +21,10 @@ export function MailView() {
                 <td className="whitespace-nowrap text-xs">{m.createdAt.slice(0, 19).replace('T', ' ')}</td><td className="text-xs">{m.to}</td>
                 <td><details><summary className="cursor-pointer text-sm">{m.subject}</summary><pre className="mt-1 whitespace-pre-wrap text-xs text-ink-soft">{m.body}</pre></details></td>
                 <td className="text-xs">{m.kind}</td>
-                <td className={`text-xs ${m.status === 'sent' ? 'text-ok' : m.status === 'failed' ? 'text-danger' : 'text-caution'}`} title={m.error ?? ''}>{m.status}</td>
+                <td className={`text-xs ${m.status === 'sent' ? 'text-ok' : m.status === 'failed' ? 'text-danger' : 'text-caution'}`}>
+                  {m.status === 'sent' ? `sent ${m.sentAt?.slice(11, 16) ?? ''}` : m.status === 'failed' ? 'not delivered' : m.status === 'sending' ? 'being sent' : 'waiting'}
+                  {m.error && <div className="max-w-xs text-ink-soft">{m.error.slice(0, 200)}</div>}
+                </td>
               </tr>
             ))}</tbody>
           </table>

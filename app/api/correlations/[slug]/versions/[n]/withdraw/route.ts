@@ -5,5 +5,5 @@ import { withdrawVersion } from '@/lib/governance/lifecycle';
 
 export const POST = route('POST /api/correlations/{slug}/versions/{n}/withdraw', { params: versionPath, body: withdrawBody }, async ({ caller, params, body }) => {
   if (caller!.via !== 'session') throw new AppError('forbidden:session-only', 'Withdrawal needs a signed-in person, not an API token.');
-  return withdrawVersion({ actor: caller!.user, slug: params.slug, version: params.n, reason: body.reason });
+  return withdrawVersion({ actor: caller!.user, slug: params.slug, version: params.n, reason: body.reason, password: body.password });
 });
