@@ -314,7 +314,7 @@ export interface paths {
         put?: never;
         /**
          * Withdraw an approved version with a reason
-         * @description Approvers in person. The version stays readable but is never served as latest; everyone who used it is told by e-mail and webhook, and calculations that used it are flagged.
+         * @description Approvers in person, with their current password (a withdrawal is signed like an approval). The version stays readable but is never served as latest; everyone who used it is told by e-mail and webhook, and calculations that used it are flagged.
          */
         post: operations["withdrawVersion"];
         delete?: never;
@@ -1686,6 +1686,8 @@ export interface operations {
         requestBody: {
             content: {
                 "application/json": {
+                    /** @description your current password: a withdrawal is signed like an approval */
+                    password?: string;
                     reason: string;
                 };
             };
