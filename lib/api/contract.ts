@@ -36,6 +36,9 @@ export const evaluateBody = z.object({
   version: z.number().int().positive().optional().describe('pin this version; default: the latest approved version'),
   inputs: z.record(z.string(), z.unknown()).optional().describe('one set of inputs: symbol → number or { value, unit }'),
   rows: z.array(z.unknown()).optional().describe('a batch: up to 10,000 input sets, answered in order'),
+  outputUnits: z.record(z.string().max(40), z.string().min(1).max(60)).optional()
+    .refine((u) => !u || Object.keys(u).length <= 20, { message: 'at most 20 outputs' })
+    .describe('answer these outputs in these units instead of the declared ones: symbol → unit, e.g. { "h": "BTU/(hr ft^2 degF)" }'),
 }).strict().refine((b) => (b.inputs === undefined) !== (b.rows === undefined), { message: 'send either "inputs" or "rows", not both and not neither', path: ['inputs'] });
 
 export const warning = z.object({
@@ -51,6 +54,7 @@ export const band = z.object({
 export const evaluateAnswer = z.object({
   slug: z.string(), version: z.number().int(), contentHash: z.string().nullable(), status: z.enum(VERSION_STATUSES),
   bands: z.record(z.string(), band.nullable()).describe('band of each output (null: the version states no accuracy); the same for every row'),
+  units: z.record(z.string(), z.string()).describe('the unit each output is given in: the declared one, or the one asked for in outputUnits ("1": dimensionless)'),
   outputs: z.record(z.string(), z.number()).optional(),
   warnings: z.array(warning).optional(),
   results: z.array(z.object({

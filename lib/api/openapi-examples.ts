@@ -41,7 +41,7 @@ export const EXAMPLES = {
   evaluateAnswer: {
     slug: 'pipe-turbulent-gnielinski', version: 1, contentHash: HASH, status: 'approved',
     bands: { Nu_D: { rel: 0.1, basis: 'Gnielinski (1976): about ±10 % on the data' } },
-    outputs: { Nu_D: 170.4 }, warnings: [],
+    units: { Nu_D: '1' }, outputs: { Nu_D: 170.4 }, warnings: [],
   },
   error: { error: { code: 'invalid:inputs', message: 'The inputs are not valid.', details: { issues: [{ path: 'inputs.Re_D', message: 'must be a finite number' }] } } },
   templatesAnswer: { items: [{ slug: 'flat-plate-forced-convection-air', title: 'Flat plate in air, forced convection', category: 'external-flow', situation: 'flat plate', version: 1, contentHash: HASH, status: 'approved' }], total: 1 },

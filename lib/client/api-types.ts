@@ -1344,6 +1344,10 @@ export interface operations {
                     inputs?: {
                         [key: string]: unknown;
                     };
+                    /** @description answer these outputs in these units instead of the declared ones: symbol → unit, e.g. { "h": "BTU/(hr ft^2 degF)" } */
+                    outputUnits?: {
+                        [key: string]: string;
+                    };
                     /** @description a batch: up to 10,000 input sets, answered in order */
                     rows?: unknown[];
                     /** @description pin this version; default: the latest approved version */
@@ -1397,6 +1401,10 @@ export interface operations {
                         slug: string;
                         /** @enum {string} */
                         status: "draft" | "in_review" | "approved" | "superseded" | "returned" | "withdrawn";
+                        /** @description the unit each output is given in: the declared one, or the one asked for in outputUnits ("1": dimensionless) */
+                        units: {
+                            [key: string]: string;
+                        };
                         version: number;
                         warnings?: {
                             max?: number;
@@ -1921,6 +1929,10 @@ export interface operations {
                     /** @description one set of inputs: symbol → number or { value, unit } */
                     inputs?: {
                         [key: string]: unknown;
+                    };
+                    /** @description answer these outputs in these units instead of the declared ones: symbol → unit, e.g. { "h": "BTU/(hr ft^2 degF)" } */
+                    outputUnits?: {
+                        [key: string]: string;
                     };
                     /** @description a batch: up to 10,000 input sets, answered in order */
                     rows?: unknown[];

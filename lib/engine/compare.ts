@@ -17,8 +17,46 @@ export interface Comparison {
   from: number;
   to: number;
   series: CompareSeries[];
-  /** Largest relative difference of each series from the first, and where it occurs. */
+  /** Largest relative difference of each series from the first where both are valid, and where it occurs. */
   largest: { label: string; relDiff: number; at: number }[];
+  /** How each series differs from the first, in words' terms (where both are valid). */
+  differences: Difference[];
+}
+
+/**
+ * The signed relative difference (s − base)/|base| over the points where both are valid, summarised: none (below the
+ * evaluation's rounding, ROUNDING), uniform (the same everywhere to UNIFORM, e.g. a changed leading coefficient),
+ * or varying between min and max. `points` counts where both were valid.
+ */
+export interface Difference {
+  label: string;
+  kind: 'none' | 'uniform' | 'varies' | 'no-overlap';
+  /** Signed relative differences: the uniform value, or the range. */
+  value?: number;
+  min?: number;
+  max?: number;
+  points: number;
+}
+
+/** Relative differences below this are the evaluation's rounding (a few ulps through a chain of operations). */
+export const ROUNDING = 1e-9;
+/** A difference whose spread across the range is below this (relative) is the same everywhere. */
+export const UNIFORM = 1e-6;
+
+export function describeDifference(base: CompareSeries, s: CompareSeries): Difference {
+  const d: number[] = [];
+  s.points.forEach((p, i) => {
+    const b = base.points[i];
+    if (p.y === null || b.y === null || b.y === 0 || p.warned || b.warned) return;
+    const r = (p.y - b.y) / Math.abs(b.y);
+    d.push(Math.abs(r) < ROUNDING ? 0 : r);
+  });
+  if (!d.length) return { label: s.label, kind: 'no-overlap', points: 0 };
+  const min = Math.min(...d);
+  const max = Math.max(...d);
+  if (Math.max(Math.abs(min), Math.abs(max)) === 0) return { label: s.label, kind: 'none', points: d.length };
+  if (max - min <= UNIFORM * Math.max(1, Math.abs((max + min) / 2))) return { label: s.label, kind: 'uniform', value: (max + min) / 2, points: d.length };
+  return { label: s.label, kind: 'varies', min, max, points: d.length };
 }
 
 /** Log spacing for inputs spanning two decades or more (Re, Ra…), linear otherwise. */
@@ -74,15 +112,18 @@ export function compareDefinitions({ items, sweep, output, fixed, from, to, poin
     return { label: it.label, points, validFrom: ranges[k].min, validTo: ranges[k].max };
   });
   const base = series[0];
+  // Differences count only where both curves are inside their validity ranges (no warning, a result): comparing
+  // an extrapolation says nothing about either correlation.
   const largest = series.slice(1).map((s) => {
     let best = { relDiff: 0, at: xs[0] };
     s.points.forEach((p, i) => {
-      const b = base.points[i].y;
-      if (p.y === null || b === null || b === 0) return;
-      const d = Math.abs(p.y - b) / Math.abs(b);
+      const b = base.points[i];
+      if (p.y === null || b.y === null || b.y === 0 || p.warned || b.warned) return;
+      const d = Math.abs(p.y - b.y) / Math.abs(b.y);
       if (d > best.relDiff) best = { relDiff: d, at: p.x };
     });
     return { label: s.label, ...best };
   });
-  return { sweep, output, scale, from: lo, to: hi, series, largest };
+  const differences = series.slice(1).map((s) => describeDifference(base, s));
+  return { sweep, output, scale, from: lo, to: hi, series, largest, differences };
 }

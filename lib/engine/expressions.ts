@@ -118,6 +118,24 @@ export interface CheckedExpression {
   nodes: number;
 }
 
+/**
+ * The symbols a formula reads, in the order it first reads them (for a form that offers to declare them), or the
+ * formula's problem if it has one other than undeclared symbols (at most 30 symbols are collected).
+ */
+export function symbolsRead(source: string): { symbols: string[]; error?: string } {
+  const found: string[] = [];
+  for (let k = 0; k < 30; k++) {
+    try {
+      checkExpression(source, new Set(found));
+      return { symbols: found };
+    } catch (err) {
+      if (err instanceof ExpressionError && err.unknownSymbol && !found.includes(err.unknownSymbol)) { found.push(err.unknownSymbol); continue; }
+      return { symbols: found, error: (err as Error).message };
+    }
+  }
+  return { symbols: found, error: 'the formula reads more than 30 symbols' };
+}
+
 /** Parses and whitelists an expression; `declared` is every symbol it may read. */
 export function checkExpression(source: string, declared: ReadonlySet<string>): CheckedExpression {
   if (typeof source !== 'string' || !source.trim()) throw new ExpressionError('the expression is empty');

@@ -8,6 +8,7 @@ import { consumeRateLimit } from '@/lib/api/rate-limit';
 import { loadVerifiedCorrelation, loadVerifiedTemplate, type RunnableChain } from './verified';
 import { INLINE_WORK, runOnPool } from './pool';
 import { bandsOf, propagate } from '@/lib/engine/uncertainty';
+import { convert, isDimensionless } from '@/lib/engine/units';
 
 export const MAX_ROWS = 10_000;
 /** Field problems listed in one answer: the first ones and a count, never an answer larger than the body. */
@@ -17,6 +18,32 @@ export interface EvaluateRequest {
   version?: number;
   inputs?: Record<string, unknown>;
   rows?: unknown[];
+  /** Answer these outputs in these units (symbol → unit) instead of the declared ones. */
+  outputUnits?: Record<string, string>;
+}
+
+/**
+ * The unit each output is answered in, and the affine map from its declared unit. Unknown outputs and units of
+ * another dimension are refused by field, before anything is evaluated.
+ */
+function outputConversion(declared: Map<string, string>, asked: Record<string, string> | undefined) {
+  const units = Object.fromEntries(declared);
+  const maps = new Map<string, { a: number; b: number }>();
+  const issues: InputIssue[] = [];
+  for (const [symbol, unit] of Object.entries(asked ?? {})) {
+    const from = declared.get(symbol);
+    if (from === undefined) { issues.push({ path: `outputUnits.${symbol}`, message: `not an output; the outputs are ${[...declared.keys()].join(', ')}` }); continue; }
+    try {
+      const b = convert(0, from, unit);
+      maps.set(symbol, { a: convert(1, from, unit) - b, b });
+      units[symbol] = unit;
+    } catch (err) {
+      issues.push({ path: `outputUnits.${symbol}`, message: `${(err as Error).message}; ${symbol} is declared in ${isDimensionless(from) ? 'no unit (dimensionless)' : `"${from}"`}` });
+    }
+  }
+  if (issues.length) throw new AppError('invalid:outputUnits', `Output unit problem: ${issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`, { issues });
+  const apply = (symbol: string, value: number) => { const m = maps.get(symbol); return m ? m.a * value + m.b : value; };
+  return { units, apply };
 }
 
 function assertRowCount(rows: unknown[] | undefined) {
@@ -62,23 +89,24 @@ function refusal(err: unknown): never {
 export async function evaluateCorrelation({ actor, tokenId, slug, request }: { actor: AuthUser; tokenId: number | null; slug: string; request: EvaluateRequest }) {
   assertRowCount(request.rows);
   const { version: v, compiled: c, notices } = await loadVerifiedCorrelation({ actor, slug, version: request.version });
-  // Each output's band: the version's stated accuracy, the same for every row.
-  const head = { slug, version: v.version, contentHash: v.contentHash, status: v.status, bands: bandsOf(c.definition) };
+  const out = outputConversion(new Map(c.definition.outputs.map((o) => [o.symbol, o.unit])), request.outputUnits);
+  // Each output's band: the version's stated accuracy (relative, so the same in any unit), the same for every row.
+  const head = { slug, version: v.version, contentHash: v.contentHash, status: v.status, bands: bandsOf(c.definition), units: out.units };
   const count = request.rows?.length ?? 1;
   await consumeRateLimit({ userId: actor.id, tokenId, evaluations: count * c.stepsPerRow });
 
   if (request.rows) {
     const flat = readRows(request.rows, c.inputSymbols.length, c.readInputs);
     // Small batches run here, on the fast path; big ones on the worker pool within the time budget.
-    const out = count * c.rowCost <= INLINE_WORK ? c.runMany(flat, count)
+    const ran = count * c.rowCost <= INLINE_WORK ? c.runMany(flat, count)
       : await runOnPool({ kind: 'correlation', version: { definitionText: v.definitionText, contentHash: v.contentHash }, rows: flat, count }, `Evaluating ${count} rows of "${slug}"`);
     const m = c.outputSymbols.length;
     const results = request.rows.map((_, r) => {
-      const err = out.errors.get(r);
+      const err = ran.errors.get(r);
       if (err) return { outputs: null, warnings: err.warnings, error: { code: `refused:${err.code}`, message: err.message } };
       const outputs: Record<string, number> = {};
-      for (let i = 0; i < m; i++) outputs[c.outputSymbols[i]] = out.outputs[r * m + i];
-      return { outputs, warnings: out.warnings.get(r) ?? [] };
+      for (let i = 0; i < m; i++) outputs[c.outputSymbols[i]] = out.apply(c.outputSymbols[i], ran.outputs[r * m + i]);
+      return { outputs, warnings: ran.warnings.get(r) ?? [] };
     });
     recordUsage({ userId: actor.id, tokenId, versionId: v.id, evaluations: request.rows.length });
     return { ...head, ...(notices.length ? { warnings: notices } : {}), results };
@@ -87,7 +115,8 @@ export async function evaluateCorrelation({ actor, tokenId, slug, request }: { a
   try {
     const r = c.evaluate(request.inputs ?? {});
     recordUsage({ userId: actor.id, tokenId, versionId: v.id, evaluations: 1 });
-    return { ...head, outputs: r.outputs, warnings: [...notices, ...r.warnings] };
+    const outputs = Object.fromEntries(Object.entries(r.outputs).map(([s, x]) => [s, out.apply(s, x)]));
+    return { ...head, outputs, warnings: [...notices, ...r.warnings] };
   } catch (err) {
     refusal(err);
   }
@@ -100,9 +129,10 @@ export async function evaluateCorrelation({ actor, tokenId, slug, request }: { a
 export async function runChain({ actor, tokenId, runnable, request }: { actor: AuthUser; tokenId: number | null; runnable: RunnableChain; request: EvaluateRequest }) {
   assertRowCount(request.rows);
   const { chain, template, notices } = runnable;
+  const out = outputConversion(new Map(chain.outputSymbols.map((s) => [s, chain.units.get(s)!])), request.outputUnits);
   const head = {
     slug: template?.slug ?? null, version: template?.version ?? null, contentHash: template?.contentHash ?? null, status: template?.status ?? null,
-    title: template?.title ?? chain.definition.title, units: Object.fromEntries(chain.outputSymbols.map((s) => [s, chain.units.get(s)!])),
+    title: template?.title ?? chain.definition.title, units: out.units,
   };
   const count = request.rows ? request.rows.length : 1;
   await consumeRateLimit({ userId: actor.id, tokenId, evaluations: count * chain.stepsPerRow });
@@ -112,17 +142,17 @@ export async function runChain({ actor, tokenId, runnable, request }: { actor: A
 
   if (request.rows) {
     const flat = readRows(request.rows, chain.inputSymbols.length, chain.readInputs);
-    const out = count * chain.rowCost <= INLINE_WORK ? chain.runMany(flat, count)
+    const ran = count * chain.rowCost <= INLINE_WORK ? chain.runMany(flat, count)
       : await runOnPool<ChainWarning>({ kind: 'chain', key: template?.contentHash ?? null, definition: chain.definition, pins: runnable.pinned, rows: flat, count }, `Running ${count} rows of "${head.title}"`);
     const m = chain.outputSymbols.length;
     const choices = chain.definition.steps.flatMap((s) => (s.kind === 'choice' ? [s] : []));
     const results = request.rows.map((_, r) => {
-      const picked = Object.fromEntries(choices.map((s, k) => [s.key, s.options[out.picks[k][r]]?.label ?? null]));
-      const err = out.errors.get(r);
+      const picked = Object.fromEntries(choices.map((s, k) => [s.key, s.options[ran.picks[k][r]]?.label ?? null]));
+      const err = ran.errors.get(r);
       if (err) return { outputs: null, warnings: err.warnings, picked, error: { code: `refused:${err.code}`, message: err.message } };
       const outputs: Record<string, number> = {};
-      for (let i = 0; i < m; i++) outputs[chain.outputSymbols[i]] = out.outputs[r * m + i];
-      return { outputs, warnings: out.warnings.get(r) ?? [], picked };
+      for (let i = 0; i < m; i++) outputs[chain.outputSymbols[i]] = out.apply(chain.outputSymbols[i], ran.outputs[r * m + i]);
+      return { outputs, warnings: ran.warnings.get(r) ?? [], picked };
     });
     used();
     return { ...head, ...(notices.length ? { warnings: notices } : {}), results };
@@ -135,7 +165,9 @@ export async function runChain({ actor, tokenId, runnable, request }: { actor: A
     // The band of every result and its budget by step: first-order propagation of the stated accuracies.
     let uncertainty: ReturnType<typeof propagate> | undefined;
     try { uncertainty = propagate(chain, runnable.resolve, values, r); } catch (err) { console.error('band propagation failed', err); }
-    return { ...head, steps: r.steps, outputs: r.outputs, warnings: [...notices, ...r.warnings], uncertainty };
+    // Steps stay in their declared units (the record of the chain); the results in the units asked for.
+    const outputs = Object.fromEntries(Object.entries(r.outputs).map(([s, x]) => [s, out.apply(s, x)]));
+    return { ...head, steps: r.steps, outputs, warnings: [...notices, ...r.warnings], uncertainty };
   } catch (err) {
     refusal(err);
   }

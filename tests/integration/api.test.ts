@@ -103,6 +103,26 @@ describe('integrator API', () => {
     expect(cold.body.warnings[0]).toMatchObject({ symbol: 'T', value: 100, min: 170, max: 1900 });
   });
 
+  it('answers outputs in the units asked for, and refuses an unknown output or a unit of another dimension by field', async () => {
+    const path = '/api/correlations/ideal-gas-density/evaluate';
+    const inputs = { p: 101325, T: 288.15, M: 0.0289644 };
+    const si = await call(path, { token: evalToken, body: { inputs } });
+    expect(si.body.units).toEqual({ rho: 'kg/m^3' });
+    // 1 lb/ft^3 = 0.45359237 kg / 0.3048^3 m^3 exactly (the international pound and foot, NIST SP 811 appendix B).
+    const lb = await call(path, { token: evalToken, body: { inputs, outputUnits: { rho: 'lb/ft^3' } } });
+    expect(lb.body.units).toEqual({ rho: 'lb/ft^3' });
+    expect(lb.body.outputs.rho).toBeCloseTo(si.body.outputs.rho / (0.45359237 / 0.3048 ** 3), 12);
+    const rows = await call(path, { token: evalToken, body: { rows: [inputs, { ...inputs, T: 576.3 }], outputUnits: { rho: 'g/cm^3' } } });
+    expect(rows.body.results[0].outputs.rho).toBeCloseTo(si.body.outputs.rho / 1000, 14);
+    const unknown = await call(path, { token: evalToken, body: { inputs, outputUnits: { h: 'W/(m^2 K)' } } });
+    expect(unknown.status).toBe(422);
+    expect(unknown.body.error.details.issues[0].path).toBe('outputUnits.h');
+    const wrong = await call(path, { token: evalToken, body: { inputs, outputUnits: { rho: 'Pa' } } });
+    expect(wrong.status).toBe(422);
+    expect(wrong.body.error.details.issues[0]).toMatchObject({ path: 'outputUnits.rho' });
+    expect(wrong.body.error.details.issues[0].message).toMatch(/different dimensions/);
+  });
+
   it('evaluates batches in order, and refuses more than 10,000 rows with 413', async () => {
     const rows = [1, 10, 100, 1e3, 1e4, 1e5].map((re) => ({ Re_D: re, Pr: 0.71 }));
     const res = await call(`/api/correlations/${CB}/evaluate`, { token: evalToken, body: { rows } });

@@ -202,5 +202,28 @@ describe('content hash and comparison', () => {
     expect(cmp.scale).toBe('log');
     expect(cmp.largest[0].at).toBeCloseTo(5e5, 6);
     expect(cmp.largest[0].relDiff).toBeCloseTo(0.1, 12);
+    expect(cmp.differences[0]).toMatchObject({ kind: 'varies' });
+    // Exact: (1 + Re/5e6) − 1 runs from 2e-4 at Re = 1e3 to 0.1 at 5e5.
+    expect(cmp.differences[0].min).toBeCloseTo(2e-4, 12);
+    expect(cmp.differences[0].max).toBeCloseTo(0.1, 12);
+  });
+
+  it('says a changed leading coefficient is a uniform difference, and an identical version none', () => {
+    // 0.332 → 0.3323: exactly (0.3323/0.332 − 1) everywhere, whatever the rounding of each evaluation.
+    const scaled = { ...laminarLocal, outputs: [{ ...laminarLocal.outputs[0], expression: '0.3323*Re_x^(1/2)*Pr^(1/3)' }] };
+    const same = { ...laminarLocal, outputs: [{ ...laminarLocal.outputs[0], expression: 'Re_x^(1/2)*Pr^(1/3)*0.332' }] };
+    const cmp = compareDefinitions({ items: [{ label: 'v1', definition: laminarLocal }, { label: 'v2', definition: scaled }, { label: 'v3', definition: same }], sweep: 'Re_x', output: 'Nu_x', fixed: { Pr: 0.7 }, from: 1e3, to: 5e5, points: 60 });
+    expect(cmp.differences[0].kind).toBe('uniform');
+    expect(cmp.differences[0].value).toBeCloseTo(0.3323 / 0.332 - 1, 12);
+    expect(cmp.differences[1]).toMatchObject({ kind: 'none', points: 60 });
+  });
+
+  it('compares only where both curves are inside their validity ranges', () => {
+    // v2 differs by 10 % but only above Re 4e5, where v1 (valid to 5e5) and v2 (valid to 4e5) are not both valid.
+    const v2 = { ...laminarLocal, outputs: [{ ...laminarLocal.outputs[0], expression: 'Re_x > 4e5 ? 1.1*0.332*Re_x^(1/2)*Pr^(1/3) : 0.332*Re_x^(1/2)*Pr^(1/3)' }], validity: [{ symbol: 'Re_x', max: 4e5 }, { symbol: 'Pr', min: 0.6 }] };
+    const cmp = compareDefinitions({ items: [{ label: 'v1', definition: laminarLocal }, { label: 'v2', definition: v2 }], sweep: 'Re_x', output: 'Nu_x', fixed: { Pr: 0.7 }, from: 1e3, to: 5e5, points: 40 });
+    expect(cmp.largest[0].relDiff).toBe(0);
+    expect(cmp.differences[0].kind).toBe('none');
+    expect(cmp.differences[0].points).toBeLessThan(40);
   });
 });
