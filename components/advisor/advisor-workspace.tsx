@@ -10,7 +10,7 @@ import { bandText, percent as pct } from '@/lib/client/bands';
 import type { ApiAnswer } from '@/lib/client/typed';
 import { SeriesChart, type ChartSeries } from '@/components/charts/series-chart';
 import { Caution } from '@/components/ui/caution';
-import { Sym } from '@/components/calculation/symbol';
+import { Sym } from '@/components/ui/sym';
 
 type Advice = ApiAnswer<'/api/advice', 'post'>;
 type Situations = ApiAnswer<'/api/advice', 'get'>;
@@ -147,7 +147,8 @@ export function AdvisorWorkspace() {
             {a.sweep && series.length > 0 && (
               <section className="panel space-y-2" aria-label="Plot of the correlations">
                 <h2 className="font-semibold">Over {a.sweep.symbol}</h2>
-                <SeriesChart series={series} logX xLabel={a.sweep.symbol} yLabel={a.output} limits={point !== undefined ? [{ x: point, label: 'your point' }] : []} height={380} />
+                <SeriesChart series={series} logX scaleSwitches xLabel={a.sweep.symbol} yLabel={a.output} limits={point !== undefined ? [{ x: point, label: 'your point' }] : []} height={380}
+                  caption={`${a.output} of each correlation over ${a.sweep.symbol}, solid inside its validity ranges and dashed outside`} />
                 <p className="text-xs text-ink-faint">Solid where the point lies inside the correlation’s validity ranges, dashed where it does not (an extrapolation). Other inputs held at your values.</p>
               </section>
             )}

@@ -4,7 +4,8 @@ import dynamic from 'next/dynamic';
 import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { useState } from 'react';
+import { useCallback, useState } from 'react';
+import { useSearchParams } from 'next/navigation';
 import { api, ApiError } from '@/lib/client/api';
 import { QueryState } from '@/components/ui/query-state';
 import { StatusBadge } from '@/components/ui/status-badge';
@@ -39,7 +40,10 @@ function Editor({ detail }: { detail: VersionDetail }) {
   const router = useRouter();
   const qc = useQueryClient();
   const { slug, version } = detail;
-  const [tab, setTab] = useState<Tab>('json');
+  const [tab, setTab] = useState<Tab>('form');
+  const created = useSearchParams().get('created') === '1';
+  const [pendingRows, setPendingRows] = useState(false);
+  const onPending = useCallback((p: boolean) => setPendingRows(p), []);
   const [text, setText] = useState(() => JSON.stringify(detail.definition, null, 2));
   const [editorKey, setEditorKey] = useState(0);
   const [cases, setCases] = useState<CheckCase[]>(detail.checkCases);
@@ -54,6 +58,7 @@ function Editor({ detail }: { detail: VersionDetail }) {
 
   const save = async () => {
     if (!parsed) throw new Error(`The definition is not valid JSON: ${jsonError}`);
+    if (pendingRows) throw new Error('Rows you pasted or uploaded are waiting in the preview on the “Check cases” tab: add them or discard them first; nothing was saved.');
     await api(`/api/correlations/${slug}/versions/${version}`, { method: 'PATCH', body: { definition: parsed, checkCases: cases } });
     setDirty(false);
   };
@@ -89,6 +94,7 @@ function Editor({ detail }: { detail: VersionDetail }) {
           <button type="button" className="btn-primary" disabled={busy} onClick={() => submit.mutate()}>Submit for review</button>
         </div>
       </header>
+      {created && !message && <p role="status" className="rounded bg-ok-bg px-3 py-2 text-sm text-ok">Draft v{version} created. Add the validity ranges, any constants and steps, the stated accuracy and check cases; “Save and validate” runs every check.</p>}
       {message && <p role={message.kind === 'error' ? 'alert' : 'status'} className={`rounded px-3 py-2 text-sm ${message.kind === 'ok' ? 'bg-ok-bg text-ok' : 'bg-danger-bg text-danger'}`}>{message.text}</p>}
       {problems.length > 0 && (
         <ul className="rounded border border-danger/30 bg-danger-bg px-3 py-2 text-sm text-danger" aria-label="Problems">
@@ -96,7 +102,7 @@ function Editor({ detail }: { detail: VersionDetail }) {
         </ul>
       )}
       <TabList label="Draft parts" value={tab} className="flex gap-1 border-b border-line"
-        tabs={[['json', 'Definition (JSON)'], ['form', 'Form'], ['cases', `Check cases (${cases.length})`]]}
+        tabs={[['form', 'Definition'], ['cases', `Check cases (${cases.length})${pendingRows ? ' · rows waiting' : ''}`], ['json', 'JSON']]}
         onChange={(t) => { if (t === 'json') setEditorKey((k) => k + 1); setTab(t); }}
         tabClass={(on) => `-mb-px border-b-2 px-3 py-2 text-sm ${on ? 'border-brand font-medium text-brand-dark' : 'border-transparent text-ink-soft hover:text-ink'}`} />
       {tab === 'json' && (
@@ -106,7 +112,7 @@ function Editor({ detail }: { detail: VersionDetail }) {
         </section>
       )}
       {tab === 'form' && (parsed ? <DefinitionForm definition={parsed} onChange={(d) => { setText(JSON.stringify(d, null, 2)); setDirty(true); }} /> : <p className="text-sm text-danger">Fix the JSON first: {jsonError}</p>)}
-      {tab === 'cases' && (parsed ? <CheckCaseTable definition={parsed} cases={cases} onChange={(c) => { setCases(c); setDirty(true); }} report={report} /> : <p className="text-sm text-danger">Fix the JSON first: {jsonError}</p>)}
+      {tab === 'cases' && (parsed ? <CheckCaseTable definition={parsed} cases={cases} onChange={(c) => { setCases(c); setDirty(true); }} report={report} onPending={onPending} /> : <p className="text-sm text-danger">Fix the JSON first: {jsonError}</p>)}
       <ValidationReportView report={report} checkCases={cases} title="Live validation report" emptyText={`Press “Save and validate” to run schema, expression, dimension and check-case checks on this draft (${cases.length} check case${cases.length === 1 ? '' : 's'}).`} />
     </div>
   );

@@ -10,7 +10,7 @@ import { pinsOf } from '@/lib/engine/template-types';
 import { ResultsTable, StepChain } from './step-chain';
 import { UncertaintyBudget } from './uncertainty-budget';
 import { FlagBanner, inputText, useCalculation } from './calculation-view';
-import { Sym } from './symbol';
+import { Sym } from '@/components/ui/sym';
 
 interface PinnedDetail { slug: string; version: number; title: string; contentHash: string; status: string; definition: { references: { citation: string; locator?: string; doi?: string }[]; propertyBasis?: string } }
 

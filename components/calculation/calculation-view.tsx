@@ -10,7 +10,7 @@ import { CopyButton } from '@/components/ui/copy-button';
 import type { TemplateDefinition } from '@/lib/engine/template-types';
 import { chainNotices, ResultsTable, StepChain } from './step-chain';
 import { UncertaintyBudget } from './uncertainty-budget';
-import { Sym } from './symbol';
+import { Sym } from '@/components/ui/sym';
 import type { RunAnswer } from './types';
 
 export interface CalculationDetail {
@@ -107,7 +107,7 @@ export function CalculationView({ id, revision, justSaved }: { id: number; revis
             {rows && a.results && (
               <section className="panel space-y-2">
                 <h2 className="font-semibold">{rows.length} cases</h2>
-                <div className="max-h-[32rem] overflow-auto">
+                <div className="max-h-[32rem] overflow-auto" tabIndex={0} role="region" aria-label="Result rows">
                   <table className="table-plain" aria-label="Case results">
                     <thead><tr><th scope="col">#</th>{content.chain.inputs.map((i) => <th scope="col" key={i.symbol}>{i.symbol}</th>)}{content.chain.outputs.map((o) => <th scope="col" key={o.symbol}>{o.symbol} [{a.units[o.symbol]}]</th>)}<th scope="col">warnings</th></tr></thead>
                     <tbody>{a.results.slice(0, 500).map((r, k) => (

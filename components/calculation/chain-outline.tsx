@@ -2,7 +2,7 @@
 
 import Link from 'next/link';
 import type { ChainStep, LeafStep, TemplateDefinition } from '@/lib/engine/template-types';
-import { Sym, UnitText } from './symbol';
+import { Sym, UnitText } from '@/components/ui/sym';
 
 function Leaf({ step }: { step: LeafStep }) {
   switch (step.kind) {

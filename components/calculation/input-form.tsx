@@ -2,7 +2,7 @@
 
 import { isDimensionless, unitChoices } from '@/lib/client/units';
 import type { InputDef } from '@/lib/engine/types';
-import { Sym } from './symbol';
+import { Sym } from '@/components/ui/sym';
 
 export interface InputState { values: Record<string, string>; units: Record<string, string> }
 

@@ -91,12 +91,10 @@ export function ParametricRun({ slug, version, definition, example }: { slug: st
               <label>plot <select className="field-input inline-block w-auto" value={y} onChange={(e) => setY(e.target.value)} aria-label="output to plot">{definition.outputs.map((o) => <option key={o.symbol} value={o.symbol}>{o.symbol}</option>)}</select></label>
               <label>against <select className="field-input inline-block w-auto" value={xs} onChange={(e) => setX(e.target.value)} aria-label="input on the horizontal axis">{definition.inputs.map((i) => <option key={i.symbol} value={i.symbol}>{i.symbol}</option>)}</select></label>
             </div>
-            <figure>
-              <SeriesChart series={[{ label: `${y} [${run.data.units[y]}]`, points: points.map((p) => ({ x: p.x, y: p.y })) }]} points={points.filter((p) => p.warned && p.y !== null).map((p) => ({ x: p.x, y: p.y!, label: 'range warning' }))}
-                xLabel={xs} yLabel={`${y} [${run.data.units[y]}]`} logX={false} height={280} />
-              <figcaption className="text-xs text-ink-soft">{y} against {xs} for every case; marked points carry a range warning. The table below holds the same values.</figcaption>
-            </figure>
-            <div className="max-h-96 overflow-auto">
+            <SeriesChart series={[{ label: `${y} [${run.data.units[y]}]`, points: points.map((p) => ({ x: p.x, y: p.y })) }]} points={points.filter((p) => p.warned && p.y !== null).map((p) => ({ x: p.x, y: p.y!, label: 'range warning' }))}
+              xLabel={xs} yLabel={`${y} [${run.data.units[y]}]`} logX={false} scaleSwitches height={280}
+              caption={`${y} against ${xs} for every case; marked points carry a range warning (the table below holds the same values)`} />
+            <div className="max-h-96 overflow-auto" tabIndex={0} role="region" aria-label="Run results">
               <table className="table-plain" aria-label="Case results">
                 <thead><tr><th scope="col">#</th>{definition.inputs.map((i) => <th scope="col" key={i.symbol}>{i.symbol}</th>)}{definition.outputs.map((o) => <th scope="col" key={o.symbol}>{o.symbol} [{run.data!.units[o.symbol]}]</th>)}<th scope="col">choices</th><th scope="col">warnings</th></tr></thead>
                 <tbody>

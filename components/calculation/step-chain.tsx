@@ -3,7 +3,7 @@
 import Link from 'next/link';
 import { formatNumber } from '@/lib/client/units';
 import { bandText } from '@/lib/client/bands';
-import { Sym, UnitText } from './symbol';
+import { Sym, UnitText } from '@/components/ui/sym';
 import type { ChainWarningView, StepRecordView } from './types';
 
 function Warnings({ warnings }: { warnings: ChainWarningView[] }) {

@@ -3,7 +3,7 @@
 import { useState } from 'react';
 import { formatNumber } from '@/lib/client/units';
 import { bandText, percent as pct } from '@/lib/client/bands';
-import { Sym, UnitText } from './symbol';
+import { Sym, UnitText } from '@/components/ui/sym';
 import type { RunAnswer } from './types';
 
 type Uncertainty = NonNullable<RunAnswer['uncertainty']>;

@@ -33,7 +33,7 @@ export function EquationsSection({ v }: { v: VersionDetail }) {
             <p className="text-xs text-ink-soft">Source: {t.source}</p>
             <details>
               <summary className="cursor-pointer text-sm font-medium">Show the tabulated values</summary>
-              <div className="mt-2 max-h-96 overflow-auto">
+              <div className="mt-2 max-h-96 overflow-auto" tabIndex={0} role="region" aria-label="Tabulated values">
                 <table className="table-plain">
                   <thead><tr>{t.columns.map((c) => <th key={c.name} className="normal-case">{c.name} <span className="font-normal text-ink-faint">[{c.unit}]</span></th>)}</tr></thead>
                   <tbody>{key?.values.map((_, r) => <tr key={r}>{t.columns.map((c) => <td key={c.name} className="font-mono text-xs">{formatNumber(c.values[r], 6)}</td>)}</tr>)}</tbody>

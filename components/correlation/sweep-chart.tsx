@@ -4,7 +4,7 @@ import { useMutation } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import { api } from '@/lib/client/api';
 import { boundsOf, isLogRange, typicalValue } from '@/lib/engine/ranges';
-import { SeriesChart } from '@/components/charts/series-chart';
+import { SeriesChart, splitByValidity } from '@/components/charts/series-chart';
 import { defaultInputs } from './default-inputs';
 import type { VersionDetail } from './types';
 
@@ -35,8 +35,10 @@ export function SweepChart({ detail }: { detail: VersionDetail }) {
       const log = isLogRange(from, to);
       const xs = Array.from({ length: POINTS }, (_, k) => (log ? from * (to / from) ** (k / (POINTS - 1)) : from + ((to - from) * k) / (POINTS - 1)));
       const fixed = defaultInputs(d, detail.checkCases);
-      const res = await api<{ results: { outputs: Record<string, number> | null }[] }>(`/api/correlations/${detail.slug}/evaluate`, { body: { version: detail.version, rows: xs.map((x) => ({ ...fixed, [sweep]: x })) } });
-      return { log, fixed, points: xs.map((x, k) => ({ x, y: res.results[k].outputs?.[output] ?? null })) };
+      const res = await api<{ results: { outputs: Record<string, number> | null; warnings: unknown[] }[] }>(`/api/correlations/${detail.slug}/evaluate`, { body: { version: detail.version, rows: xs.map((x) => ({ ...fixed, [sweep]: x })) } });
+      const points = xs.map((x, k) => ({ x, y: res.results[k].outputs?.[output] ?? null, warned: (res.results[k].warnings?.length ?? 0) > 0 || !res.results[k].outputs }));
+      const ys = points.map((p) => p.y).filter((y): y is number => y !== null && y > 0);
+      return { log, fixed, from, to, output, sweep, points, logY: ys.length > 1 && Math.max(...ys) / Math.min(...ys) >= 100 };
     },
     onError: (e) => setError(e.message),
     onSuccess: () => setError(''),
@@ -45,9 +47,12 @@ export function SweepChart({ detail }: { detail: VersionDetail }) {
   useEffect(() => { mutate(); }, [sweep, output, mutate]);
 
   const { min, max } = boundsOf(d, sweep);
-  const cases = detail.checkCases
-    .filter((c) => typeof c.inputs[sweep] === 'number' && c.expected[output] !== undefined && !c.expectWarnings?.length)
-    .map((c) => ({ x: c.inputs[sweep] as number, y: c.expected[output], label: c.label }));
+  // Check cases are drawn only where they belong: at the values the other inputs are held at (to 1e-6).
+  const drawn = evalRows.data;
+  const atHeld = (c: (typeof detail.checkCases)[number]) => d.inputs.every((i) => i.symbol === sweep || (typeof c.inputs[i.symbol] === 'number' && drawn && Math.abs((c.inputs[i.symbol] as number) - drawn.fixed[i.symbol]) <= 1e-6 * Math.max(1, Math.abs(drawn.fixed[i.symbol]))));
+  const usable = detail.checkCases.filter((c) => typeof c.inputs[sweep] === 'number' && c.expected[drawn?.output ?? output] !== undefined && !c.expectWarnings?.length);
+  const cases = usable.filter(atHeld).map((c) => ({ x: c.inputs[sweep] as number, y: c.expected[drawn?.output ?? output], label: c.label }));
+  const elsewhere = usable.length - cases.length;
 
   return (
     <section className="panel space-y-3" aria-label="Plot">
@@ -60,14 +65,16 @@ export function SweepChart({ detail }: { detail: VersionDetail }) {
         <button type="button" className="btn-quiet" onClick={() => evalRows.mutate()}>Redraw</button>
       </div>
       {error && <p role="alert" className="text-sm text-danger">{error}</p>}
-      {evalRows.data && (
+      {drawn && (
         <>
-          <SeriesChart logX={evalRows.data.log} xLabel={sweep} yLabel={output}
-            series={[{ label: `${output}, v${detail.version}`, points: evalRows.data.points }]} points={cases}
-            limits={[...(min !== undefined ? [{ x: min, label: `min ${sweep}` }] : []), ...(max !== undefined ? [{ x: max, label: `max ${sweep}` }] : [])]} />
-          <p className="text-xs text-ink-faint">
-            Other inputs held at {Object.entries(evalRows.data.fixed).filter(([s]) => s !== sweep).map(([s, v]) => `${s} = ${Number(v.toPrecision(3))}`).join(', ') || '—'}.
-            Check cases are drawn at their own values of the other inputs.
+          <SeriesChart key={`${drawn.sweep}-${drawn.output}-${drawn.from}-${drawn.to}`} logX={drawn.log} logY={drawn.logY} scaleSwitches xDomain={[drawn.from, drawn.to]} xLabel={drawn.sweep} yLabel={drawn.output}
+            series={splitByValidity(`${drawn.output}, v${detail.version}`, drawn.points, 0)} points={cases}
+            caption={`${drawn.output} of version ${detail.version} against ${drawn.sweep} from ${drawn.from} to ${drawn.to}; dashed where an input is outside the validity range`}
+            limits={[...(min !== undefined ? [{ x: min, label: `min ${drawn.sweep}` }] : []), ...(max !== undefined ? [{ x: max, label: `max ${drawn.sweep}` }] : [])]} />
+          <p className="text-xs text-ink-soft">
+            Other inputs held at {Object.entries(drawn.fixed).filter(([sym]) => sym !== drawn.sweep).map(([sym, v]) => `${sym} = ${Number(v.toPrecision(3))}`).join(', ') || '—'}.
+            {' '}{cases.length ? `${cases.length} check case${cases.length === 1 ? '' : 's'} at these values drawn as diamonds.` : ''}
+            {elsewhere > 0 ? ` ${elsewhere} other check case${elsewhere === 1 ? ' is' : 's are'} at other values of the other inputs and not drawn (see the report below).` : ''}
           </p>
         </>
       )}

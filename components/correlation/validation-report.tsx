@@ -5,31 +5,59 @@ import type { ValidationReport } from '@/lib/engine/validate';
 import { formatNumber } from '@/lib/client/units';
 import { EvidenceSummary } from './evidence-summary';
 
-/** The validation report: stages, then every check case with computed, expected and error. */
+/** One line per stage of validation, in the words of a reviewer rather than a build log. */
+function stageWords(stage: string, passed: boolean, report: ValidationReport): string {
+  switch (stage) {
+    case 'schema': return passed ? 'The definition is complete and well-formed.' : 'The definition is incomplete or malformed.';
+    case 'expressions': return passed ? 'Every formula parses and uses allowed functions only.' : 'A formula cannot be read or uses something not allowed.';
+    case 'symbols': return passed ? 'Every symbol is declared once and used after it is computed.' : 'A symbol is undeclared, declared twice or used before it is computed.';
+    case 'dimensions': return passed ? 'Units are consistent throughout.' : 'Units do not agree somewhere.';
+    case 'check-cases': return `Check cases reproduced: ${report.summary.passed} of ${report.summary.checkCases}.`;
+    case 'coverage': return passed ? `The check cases cover the validity ranges: ${report.coverage.message}.` : `The check cases leave parts of the ranges untested: ${report.coverage.message}.`;
+    default: return `${stage}: ${passed ? 'passed' : 'failed'}.`;
+  }
+}
+
+/** Where a problem is, in words: "/outputs/0/expression" → "output 1, formula". */
+function fieldOf(pointer: string): string {
+  const parts = pointer.split('/').filter(Boolean);
+  if (!parts.length) return 'definition';
+  const names: Record<string, string> = { inputs: 'input', outputs: 'output', steps: 'step', constants: 'constant', validity: 'range', references: 'reference', checkCases: 'check case', expression: 'formula', residual: 'residual', unit: 'unit', symbol: 'symbol' };
+  return parts.map((p) => (/^\d+$/.test(p) ? String(Number(p) + 1) : names[p] ?? p)).join(' ').replace(/ (\d+)/g, ' $1,').replace(/,$/, '');
+}
+
+/** The validation report: what each stage found, then every check case with computed, expected and error. */
 export function ValidationReportView({ report, checkCases, title = 'Validation report and check cases', emptyText }: { report: ValidationReport | null; checkCases: CheckCase[]; title?: string; emptyText?: string }) {
   return (
     <section className="panel space-y-3" aria-label="Validation report">
       <div className="flex flex-wrap items-center gap-3">
         <h2 className="mr-auto font-semibold">{title}</h2>
-        {report && <span className={`rounded px-2 py-0.5 text-sm font-medium ${report.passed ? 'bg-ok-bg text-ok' : 'bg-danger-bg text-danger'}`}>{report.passed ? 'passed' : 'failed'} · {report.summary.passed}/{report.summary.checkCases} check cases · engine {report.engineVersion}</span>}
+        {report && <span className={`rounded px-2 py-0.5 text-sm font-medium ${report.passed ? 'bg-ok-bg text-ok' : 'bg-danger-bg text-danger'}`}>{report.passed ? 'Validation passed' : 'Validation found problems'} · {report.summary.passed} of {report.summary.checkCases} check cases reproduced</span>}
       </div>
       {!report && <p className="text-sm text-ink-faint">{emptyText ?? `Not validated yet: validation runs when the version is submitted (${checkCases.length} check case${checkCases.length === 1 ? '' : 's'} stored).`}</p>}
       {report && (
         <>
-          <ol className="flex flex-wrap gap-2 text-xs">
-            {report.stages.map((s) => <li key={s.stage} className={`rounded border px-2 py-0.5 ${s.passed ? 'border-ok/30 bg-ok-bg text-ok' : s.stage === 'coverage' ? 'border-caution-line bg-caution-bg text-caution' : 'border-danger/30 bg-danger-bg text-danger'}`}>{s.passed ? '✓' : s.stage === 'coverage' ? '!' : '✗'} {s.stage}</li>)}
-          </ol>
-          {report.stages.flatMap((s) => s.issues).length > 0 && (
+          <ul className="grid gap-1 text-sm sm:grid-cols-2" aria-label="What the validation found">
+            {report.stages.map((st) => {
+              const words = stageWords(st.stage, st.passed, report);
+              return (
+                <li key={st.stage} className="flex gap-2">
+                  <span className={`mt-0.5 inline-block w-16 shrink-0 rounded px-1 text-center text-xs font-medium ${st.passed ? 'bg-ok-bg text-ok' : st.stage === 'coverage' ? 'bg-caution-bg text-caution' : 'bg-danger-bg text-danger'}`}>{st.passed ? 'yes' : st.stage === 'coverage' ? 'partly' : 'no'}</span>
+                  <span>{words}</span>
+                </li>
+              );
+            })}
+          </ul>
+          {report.stages.flatMap((st) => st.issues).length > 0 && (
             <ul className="space-y-1 text-sm">
-              {report.stages.flatMap((s) => s.issues).map((i, k) => <li key={k} className={i.stage === 'coverage' ? 'text-caution' : 'text-danger'}><code className="text-xs">{i.pointer}</code> {i.message}</li>)}
+              {report.stages.flatMap((st) => st.issues).map((i, k) => <li key={k} className={i.stage === 'coverage' ? 'text-caution' : 'text-danger'}><span className="text-xs text-ink-soft">{fieldOf(i.pointer)}:</span> {i.message}</li>)}
             </ul>
           )}
-          <p className="text-xs text-ink-soft">Coverage: {report.coverage.message}.</p>
           <EvidenceSummary evidence={report.evidence} />
           {report.cases.length > 0 && (
             <div className="overflow-x-auto">
               <table className="table-plain">
-                <thead><tr><th>Case</th><th>Source</th><th>Output</th><th>Computed</th><th>Expected</th><th>Error</th><th>Allowed</th><th>Result</th></tr></thead>
+                <thead><tr><th scope="col">Case</th><th scope="col">Source</th><th scope="col">Output</th><th scope="col">Computed</th><th scope="col">Expected</th><th scope="col">Difference</th><th scope="col">Allowed</th><th scope="col">Result</th></tr></thead>
                 <tbody>
                   {report.cases.flatMap((c) => (c.outputs.length ? c.outputs : [null]).map((o, k) => (
                     <tr key={`${c.index}-${k}`} className={c.passed ? '' : 'bg-danger-bg'}>
@@ -40,7 +68,7 @@ export function ValidationReportView({ report, checkCases, title = 'Validation r
                       <td className="font-mono text-xs">{o ? formatNumber(o.expected, 7) : '—'}</td>
                       <td className="font-mono text-xs">{o?.error !== null && o ? formatNumber(o.error, 3) : '—'}</td>
                       <td className="font-mono text-xs">{o ? formatNumber(o.allowed, 3) : '—'}</td>
-                      {k === 0 && <td rowSpan={Math.max(1, c.outputs.length)}>{c.passed ? <span className="text-ok">pass</span> : <span className="font-medium text-danger">fail</span>}</td>}
+                      {k === 0 && <td rowSpan={Math.max(1, c.outputs.length)}>{c.passed ? <span className="text-ok">reproduced</span> : <span className="font-medium text-danger">not reproduced</span>}</td>}
                     </tr>
                   )))}
                 </tbody>

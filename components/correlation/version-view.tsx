@@ -42,7 +42,17 @@ export function VersionView({ slug, version, user }: { slug: string; version: nu
               </div>
               {v.status === 'withdrawn' && <p role="alert" className="rounded border border-danger/40 bg-danger-bg px-3 py-2 text-sm text-danger"><strong>Withdrawn</strong> {v.withdrawnAt?.slice(0, 10)}: {v.withdrawnReason} It stays readable for traceability but is never served as the latest version.</p>}
               {v.status === 'superseded' && <p className="rounded border border-line bg-paper-sunk px-3 py-2 text-sm">A newer version of this correlation is approved. {summary.data?.latestApprovedVersion && <Link className="text-brand-dark underline" href={`/correlations/${slug}/versions/${summary.data.latestApprovedVersion}`}>Open version {summary.data.latestApprovedVersion}</Link>}</p>}
-              {['draft', 'in_review', 'returned'].includes(v.status) && <p className="rounded border border-caution-line bg-caution-bg px-3 py-2 text-sm text-caution">This version is <strong>{v.status.replace('_', ' ')}</strong>: not approved for design use.</p>}
+              {['draft', 'in_review'].includes(v.status) && <p className="rounded border border-caution-line bg-caution-bg px-3 py-2 text-sm text-caution">This version is <strong>{v.status.replace('_', ' ')}</strong>: not approved for design use.</p>}
+              {v.status === 'returned' && (() => {
+                const back = [...v.signOffs].reverse().find((s) => s.decision === 'returned');
+                return (
+                  <div role="note" className="space-y-1 rounded border border-caution-line bg-caution-bg px-3 py-2 text-sm">
+                    <p className="text-caution"><strong>Returned to its author</strong>{back ? ` by ${back.by}, ${back.at.slice(0, 10)}` : ''}: not approved for design use.</p>
+                    {back?.comment && <p className="text-ink">“{back.comment}”</p>}
+                    {v.authorId === user.id && <p className="text-ink-soft">This version stays as it was, for the record. To address the comment, start a new version from it below, change what was asked and submit it again.</p>}
+                  </div>
+                );
+              })()}
               <VersionActions detail={v} user={user} />
             </header>
 

@@ -35,13 +35,14 @@ export function DefinitionDiff({ before, after, leftLabel, rightLabel }: { befor
     k += n - 1;
   }
   const cell = (text: string | null, side: 'l' | 'r', kind: Row['kind']) => {
-    const bg = kind === 'same' ? '' : side === 'l' ? (text === null ? 'bg-paper-sunk' : 'bg-danger-bg') : (text === null ? 'bg-paper-sunk' : 'bg-ok-bg');
+    // Before in the paper's sunk tone, after in the light teal of the version under review: which side, not good or bad.
+    const bg = kind === 'same' ? '' : text === null ? 'bg-paper-sunk' : side === 'l' ? 'bg-caution-bg/50' : 'bg-brand-light/60';
     return <td className={`whitespace-pre-wrap break-all border-l border-line px-2 font-mono text-[11px] leading-5 ${bg}`}>{text ?? ''}</td>;
   };
   return (
     <div>
       <p className="mb-1 text-xs text-ink-soft">{changed === 0 ? 'No differences.' : `${changed} line${changed === 1 ? '' : 's'} differ.`}</p>
-      <div className="max-h-[520px] overflow-auto rounded border border-line">
+      <div className="max-h-[520px] overflow-auto rounded border border-line" tabIndex={0} role="region" aria-label="Raw definition differences">
         <table className="w-full table-fixed border-collapse" aria-label="Definition differences">
           <thead className="sticky top-0 bg-paper-sunk text-left text-xs"><tr><th className="px-2 py-1">{leftLabel}</th><th className="px-2 py-1">{rightLabel}</th></tr></thead>
           <tbody>{shown.map((r, k) => ('fold' in r

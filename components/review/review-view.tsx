@@ -8,13 +8,13 @@ import { api, ApiError } from '@/lib/client/api';
 import { QueryState } from '@/components/ui/query-state';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { Field } from '@/components/ui/field';
-import { SeriesChart } from '@/components/charts/series-chart';
+import { SeriesChart, splitByValidity } from '@/components/charts/series-chart';
 import { ValidationReportView } from '@/components/correlation/validation-report';
 import { DefinitionFacts, EquationsSection } from '@/components/correlation/definition-summary';
 import type { VersionDetail } from '@/components/correlation/types';
-import type { Comparison } from '@/lib/engine/compare';
+import type { Comparison, Difference } from '@/lib/engine/compare';
 import { formatNumber } from '@/lib/client/units';
-import { DefinitionDiff } from './definition-diff';
+import { DomainDiff } from './domain-diff';
 import { ChainOutline } from '@/components/calculation/chain-outline';
 import type { TemplateDefinition } from '@/lib/engine/template-types';
 
@@ -30,6 +30,13 @@ export function ReviewView({ slug, version, userId }: { slug: string; version: n
     queryKey: ['version', slug, deviation.data?.previous], enabled: Boolean(deviation.data?.previous),
     queryFn: () => api<VersionDetail>(`/api/correlations/${slug}/versions/${deviation.data!.previous}`),
   });
+  // A resubmission: the version just before this one went back to its author; show what was changed in answer.
+  const before = useQuery({
+    queryKey: ['version', slug, version - 1], enabled: version > 1 && detail.data !== undefined && !isTemplate,
+    queryFn: () => api<VersionDetail>(`/api/correlations/${slug}/versions/${version - 1}`),
+  });
+  const returned = before.data?.status === 'returned' && before.data.version !== deviation.data?.previous ? before.data : null;
+  const returnNote = returned ? [...returned.signOffs].reverse().find((s) => s.decision === 'returned') : undefined;
 
   return (
     <QueryState query={detail}>
@@ -54,30 +61,43 @@ export function ReviewView({ slug, version, userId }: { slug: string; version: n
             <EquationsSection v={v} />
             <DefinitionFacts v={v} />
           </section>
+          {returned && (
+            <section className="panel space-y-2" aria-label="Answer to the return">
+              <h2 className="font-semibold">What the author changed since version {returned.version} was returned</h2>
+              {returnNote && <p className="text-sm"><span className="text-ink-soft">{returnNote.by} returned it:</span> “{returnNote.comment}”</p>}
+              <DomainDiff before={returned} after={v} />
+            </section>
+          )}
           <section className="panel space-y-2" aria-label="Differences">
-            <h2 className="font-semibold">Definition against the previous approved version</h2>
-            {deviation.data && !deviation.data.previous && <p className="text-sm text-ink-soft">{deviation.data.message}</p>}
-            {previous.data && <DefinitionDiff before={previous.data.definition} after={v.definition} leftLabel={`version ${previous.data.version} (${previous.data.status})`} rightLabel={`version ${version} (this review)`} />}
+            <h2 className="font-semibold">What changed since the previous approved version</h2>
+            {deviation.data && !deviation.data.previous && <p className="text-sm text-ink-soft">{deviation.data.message} Judge it from the definition above and the check cases below.</p>}
+            {previous.data && <DomainDiff before={previous.data} after={v} />}
           </section>
 
-          <section className="panel space-y-2" aria-label="Deviation">
-            <h2 className="font-semibold">Numerical difference across the range</h2>
-            <QueryState query={deviation}>
-              {(dv) => !dv.comparison ? <p className="text-sm text-ink-soft">{dv.message}</p> : (
-                <>
-                  <p className="rounded bg-brand-light px-3 py-2 text-sm" data-testid="largest-difference">
-                    Largest difference: <strong>{(dv.comparison.largest[0].relDiff * 100).toPrecision(3)} %</strong> of {dv.comparison.output} at {dv.comparison.sweep} = {formatNumber(dv.comparison.largest[0].at, 4)}
-                    {' '}(other inputs at {Object.entries(dv.fixed ?? {}).map(([s, x]) => `${s} = ${formatNumber(x, 3)}`).join(', ') || '—'}).
-                  </p>
-                  <SeriesChart logX={dv.comparison.scale === 'log'} xLabel={dv.comparison.sweep} yLabel={dv.comparison.output}
-                    series={dv.comparison.series.map((s) => ({ label: s.label, points: s.points }))}
-                    limits={[{ x: dv.comparison.largest[0].at, label: 'largest difference' }]} />
-                  <SeriesChart height={200} logX={dv.comparison.scale === 'log'} xLabel={dv.comparison.sweep} yLabel="Δ, %"
-                    series={[{ label: `(v${version} − v${dv.previous}) / v${dv.previous}, %`, points: dv.comparison.series[1].points.map((p, k) => { const b = dv.comparison!.series[0].points[k].y; return { x: p.x, y: p.y !== null && b ? ((p.y - b) / Math.abs(b)) * 100 : null }; }) }]} />
-                </>
-              )}
-            </QueryState>
-          </section>
+          {deviation.data?.previous && (
+            <section className="panel space-y-2" aria-label="Deviation">
+              <h2 className="font-semibold">Numerical difference across the range</h2>
+              <QueryState query={deviation}>
+                {(dv) => !dv.comparison ? <p className="text-sm text-ink-soft">{dv.message}</p> : (
+                  <>
+                    <p className="rounded bg-brand-light px-3 py-2 text-sm" data-testid="largest-difference">
+                      {differenceInWords(dv.comparison.differences[0], dv.comparison, dv.previous!, version)}
+                      {' '}Other inputs at {Object.entries(dv.fixed ?? {}).map(([sym, x]) => `${sym} = ${formatNumber(x, 3)}`).join(', ') || '—'}; only where both versions are inside their validity ranges.
+                    </p>
+                    <SeriesChart logX={dv.comparison.scale === 'log'} scaleSwitches xDomain={[dv.comparison.from, dv.comparison.to]} xLabel={dv.comparison.sweep} yLabel={dv.comparison.output}
+                      caption={`${dv.comparison.output} of versions ${dv.previous} and ${version} against ${dv.comparison.sweep}; dashed outside each version's validity range`}
+                      series={dv.comparison.series.flatMap((s, k) => splitByValidity(s.label, s.points, k))}
+                      limits={dv.comparison.differences[0]?.kind === 'varies' ? [{ x: dv.comparison.largest[0].at, label: 'largest difference' }] : []} />
+                    {dv.comparison.differences[0]?.kind === 'varies' && (
+                      <SeriesChart height={200} logX={dv.comparison.scale === 'log'} xDomain={[dv.comparison.from, dv.comparison.to]} xLabel={dv.comparison.sweep} yLabel="Δ, %"
+                        caption={`Relative difference of version ${version} from version ${dv.previous}, in per cent, where both are valid`}
+                        series={[{ label: `(v${version} − v${dv.previous}) / v${dv.previous}, %`, points: relativeDifference(dv.comparison) }]} />
+                    )}
+                  </>
+                )}
+              </QueryState>
+            </section>
+          )}
           </>}
 
           <ValidationReportView report={v.validation} checkCases={v.checkCases} />
@@ -89,6 +109,26 @@ export function ReviewView({ slug, version, userId }: { slug: string; version: n
       )}
     </QueryState>
   );
+}
+
+/** The difference in a sentence: none, uniform ("uniformly +0.089 %"), or from … to …, with where it is largest. */
+function differenceInWords(d: Difference | undefined, c: Comparison, previous: number, version: number): string {
+  const pct = (x: number) => `${x >= 0 ? '+' : '−'}${formatNumber(Math.abs(x) * 100, 3)} %`;
+  if (!d || d.kind === 'no-overlap') return `Versions ${previous} and ${version} are nowhere both inside their validity ranges on this sweep.`;
+  if (d.kind === 'none') return `Version ${version} gives the same ${c.output} as version ${previous} across the range (to the evaluation's rounding).`;
+  if (d.kind === 'uniform') return `Version ${version} differs from version ${previous} uniformly by ${pct(d.value!)} in ${c.output} across the range.`;
+  return `Version ${version} differs from version ${previous} by ${pct(d.min!)} to ${pct(d.max!)} in ${c.output}; the largest difference, ${formatNumber(c.largest[0].relDiff * 100, 3)} %, is at ${c.sweep} = ${formatNumber(c.largest[0].at, 4)}.`;
+}
+
+/** Per cent difference of the second series from the first where both are valid; below the rounding, zero. */
+function relativeDifference(c: Comparison): { x: number; y: number | null }[] {
+  const [base, next] = c.series;
+  return next.points.map((p, k) => {
+    const b = base.points[k];
+    if (p.y === null || b.y === null || !b.y || p.warned || b.warned) return { x: p.x, y: null };
+    const r = (p.y - b.y) / Math.abs(b.y);
+    return { x: p.x, y: Math.abs(r) < 1e-9 ? 0 : r * 100 };
+  });
 }
 
 function DecisionForm({ slug, version, needsWaiver }: { slug: string; version: number; needsWaiver: boolean }) {

@@ -84,3 +84,21 @@ export function parseCheckCaseCsv(text: string, definition: Pick<Definition, 'in
   });
   return { rows, fileErrors };
 }
+
+/** The CSV columns for a definition's check cases, in the order the template and the export use. */
+export function checkCaseColumns(definition: Pick<Definition, 'inputs' | 'outputs'>): string[] {
+  return [
+    'label',
+    ...definition.inputs.map((i) => (['1', ''].includes(i.unit) ? i.symbol : `${i.symbol} [${i.unit}]`)),
+    ...definition.outputs.map((o) => `expected:${o.symbol}`),
+    'rel', 'abs', 'why', 'source_kind', 'citation', 'locator', 'expect_warnings',
+  ];
+}
+
+/** A CSV to start from for this definition: its header and one row that says what goes where. */
+export function checkCaseTemplate(definition: Pick<Definition, 'inputs' | 'outputs'>): string {
+  const columns = checkCaseColumns(definition);
+  const example = columns.map((c) => (c === 'label' ? 'describe the case' : c === 'rel' ? '0.02' : c === 'source_kind' ? 'published' : c === 'citation' ? 'Author (year) title, journal volume:pages' : c === 'locator' ? 'table 2, row 3' : ''));
+  const quote = (s: string) => (/[",\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s);
+  return `${columns.map(quote).join(',')}\n${example.map(quote).join(',')}\n`;
+}

@@ -1,4 +1,4 @@
-/** Units a person may pick for an input, by its declared unit (conversion happens on the server). */
+/** Units a person may pick for an input or an output, by its declared unit (conversion happens on the server). */
 const FAMILIES: string[][] = [
   ['K', 'degC', 'degF'],
   ['m', 'mm', 'cm', 'km', 'inch', 'ft'],
@@ -6,6 +6,11 @@ const FAMILIES: string[][] = [
   ['Pa s', 'mPa s'],
   ['m^2/s', 'mm^2/s'],
   ['W/(m K)', 'BTU/(hr ft degF)'],
+  ['W/(m^2 K)', 'BTU/(hr ft^2 degF)'],
+  ['W/m^2', 'kW/m^2', 'BTU/(hr ft^2)'],
+  ['W', 'kW', 'BTU/hr'],
+  ['kg/s', 'kg/h', 'lb/hr'],
+  ['m^2 K/W', 'hr ft^2 degF/BTU'],
   ['kg/m^3', 'g/cm^3', 'lb/ft^3'],
   ['m/s', 'km/h', 'ft/s'],
   ['J/(kg K)', 'kJ/(kg K)'],

@@ -220,7 +220,20 @@ export async function authorWork({ actor }: { actor: AuthUser }) {
     where: { authorId: actor.id, status: { [Op.in]: ['draft', 'in_review', 'returned'] } },
     include: [{ model: Correlation, as: 'correlation' }], order: [['updatedAt', 'DESC']],
   });
-  return rows.map((v) => ({ slug: v.correlation!.slug, title: v.correlation!.title, version: v.version, status: v.status, updatedAt: v.updatedAt }));
+  // A returned version carries the reviewer's comment, and the author's newer draft of it if one is open.
+  const returned = rows.filter((v) => v.status === 'returned');
+  const { SignOff } = db();
+  const signOffs = returned.length ? await SignOff.findAll({ where: { versionId: returned.map((v) => v.id), decision: 'returned' }, order: [['id', 'DESC']] }) : [];
+  const names = await userLabels({ ids: signOffs.map((s) => s.userId) });
+  return rows.map((v) => {
+    const s = v.status === 'returned' ? signOffs.find((x) => x.versionId === v.id) : undefined;
+    const newer = v.status === 'returned' ? rows.find((x) => x.correlationId === v.correlationId && x.status === 'draft' && x.version > v.version) : undefined;
+    return {
+      slug: v.correlation!.slug, title: v.correlation!.title, version: v.version, status: v.status, updatedAt: v.updatedAt,
+      ...(s ? { returnedBy: names.get(s.userId) ?? '?', returnComment: s.comment } : {}),
+      ...(newer ? { nextDraft: newer.version } : {}),
+    };
+  });
 }
 
 export { PUBLISHED };

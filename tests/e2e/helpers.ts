@@ -24,3 +24,17 @@ export function guardOffline(page: Page): string[] {
   });
   return outside;
 }
+
+/**
+ * Runs axe-core (WCAG 2.1 A and AA rules) on the page as it is now and fails on any serious or critical violation,
+ * naming the rule and the first elements; saves a full-page screenshot as test-results/screens/<name>.png.
+ */
+export async function checkScreen(page: Page, name: string) {
+  await page.waitForLoadState('networkidle');
+  const { default: AxeBuilder } = await import('@axe-core/playwright');
+  const result = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
+  await page.screenshot({ path: `test-results/screens/${name}.png`, fullPage: true });
+  const bad = result.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${v.id} (${v.impact}): ${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join(' | ')}`);
+  expect(bad, `accessibility of the screen "${name}"`).toEqual([]);
+}

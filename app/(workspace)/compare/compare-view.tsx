@@ -5,7 +5,7 @@ import { useMemo, useState } from 'react';
 import { api } from '@/lib/client/api';
 import { QueryState } from '@/components/ui/query-state';
 import { Caution } from '@/components/ui/caution';
-import { SeriesChart } from '@/components/charts/series-chart';
+import { SeriesChart, splitByValidity } from '@/components/charts/series-chart';
 import { boundsOf, typicalValue } from '@/lib/engine/ranges';
 import { formatNumber } from '@/lib/client/units';
 import type { VersionDetail } from '@/components/correlation/types';
@@ -95,11 +95,22 @@ export function CompareView() {
             {run.isError && <p role="alert" className="text-sm text-danger">{run.error.message}</p>}
             {run.data && (
               <>
-                <SeriesChart height={380} logX={run.data.scale === 'log'} xLabel={run.data.sweep} yLabel={run.data.output}
-                  series={run.data.series.map((s) => ({ label: s.label, points: s.points.map((p) => ({ x: p.x, y: p.y })) }))}
-                  bands={run.data.series.map((s, k) => ({ from: Math.max(s.validFrom ?? run.data!.from, run.data!.from), to: Math.min(s.validTo ?? run.data!.to, run.data!.to), label: `valid: ${s.label.split(' (')[0].slice(0, 28)}`, color: k }))} />
-                <ul className="text-sm">
-                  {run.data.largest.map((l) => <li key={l.label}>{l.label} differs from {run.data!.series[0].label} by at most <strong>{(l.relDiff * 100).toPrecision(3)} %</strong> at {run.data!.sweep} = {formatNumber(l.at, 4)}.</li>)}
+                <SeriesChart height={380} logX={run.data.scale === 'log'} scaleSwitches xDomain={[run.data.from, run.data.to]} xLabel={run.data.sweep} yLabel={run.data.output}
+                  caption={`${run.data.output} of ${run.data.series.length} correlations against ${run.data.sweep}; each curve is solid inside its own validity range and dashed outside it`}
+                  series={run.data.series.flatMap((s, k) => splitByValidity(s.label, s.points, k))} />
+                <ul className="space-y-1 text-sm">
+                  {run.data.differences.map((d, k) => {
+                    const l = run.data!.largest[k];
+                    const pct = (x: number) => `${x >= 0 ? '+' : '−'}${formatNumber(Math.abs(x) * 100, 3)} %`;
+                    return (
+                      <li key={d.label}>
+                        {d.label}, against {run.data!.series[0].label}: {d.kind === 'no-overlap' ? 'the two are nowhere both inside their validity ranges here.'
+                          : d.kind === 'none' ? 'the same values, where both are valid.'
+                          : d.kind === 'uniform' ? <>uniformly <strong>{pct(d.value!)}</strong> where both are valid.</>
+                          : <>from {pct(d.min!)} to {pct(d.max!)} where both are valid; largest <strong>{formatNumber(l.relDiff * 100, 3)} %</strong> at {run.data!.sweep} = {formatNumber(l.at, 4)}.</>}
+                      </li>
+                    );
+                  })}
                 </ul>
                 {defs.map((d) => { const b = boundsOf(d.definition, run.data!.sweep); return <p key={d.slug} className="text-xs text-ink-soft">{d.definition.title}: {run.data!.sweep} valid {b.min ?? '−∞'} … {b.max ?? '∞'}</p>; })}
               </>

@@ -36,7 +36,7 @@ export function EvidencePolicyForm() {
           <button type="submit" className="btn-primary" disabled={save.isPending}>Save the policy</button>
           {save.isSuccess && <p role="status" className="text-sm text-ok">Policy saved; it applies to every sign-off from now on.</p>}
           {save.isError && !Object.keys(errors).length && <p role="alert" className="text-sm text-danger">{save.error.message}</p>}
-          <dl className="space-y-1 text-xs">{Object.entries(d.grades).map(([g, m]) => <div key={g}><dt className="inline font-semibold">{g}</dt>: <dd className="inline">{m}</dd></div>)}</dl>
+          <dl className="space-y-1 text-xs">{Object.entries(d.grades).map(([g, m]) => <div key={g}><dt className="inline font-semibold">{g}:</dt> <dd className="inline">{m}</dd></div>)}</dl>
         </form>
       )}
     </QueryState>
