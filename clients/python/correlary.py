@@ -44,10 +44,12 @@ class CorrelaryError(Exception):
         self.details = details
 
 
-def _body(key, value, version):
+def _body(key, value, version, output_units=None):
     body = {key: value}
     if version is not None:
         body["version"] = int(version)
+    if output_units:
+        body["outputUnits"] = dict(output_units)
     return body
 
 
@@ -117,37 +119,39 @@ class Client:
             for w in ws or []:
                 warnings.warn(w.get("message", ""), CorrelaryRangeWarning, stacklevel=3)
 
-    def evaluate(self, slug, inputs, version=None):
-        """Evaluates one input set; returns the answer (outputs, warnings, version, contentHash).
+    def evaluate(self, slug, inputs, version=None, output_units=None):
+        """Evaluates one input set; returns the answer (outputs, warnings, version, contentHash, units).
+
+        output_units maps an output to the unit wanted, e.g. {"mu": "mPa s"}; the answer's "units" says which were used.
 
         >>> r = c.evaluate("cylinder-crossflow-churchill-bernstein", {"Re_D": 1e4, "Pr": 0.71})
         >>> r["outputs"]["Nu_D"]
         """
-        body = _body("inputs", _inputs(inputs), version)
+        body = _body("inputs", _inputs(inputs), version, output_units)
         answer = self._request("POST", f"/api/correlations/{urllib.parse.quote(slug)}/evaluate", body)
         self._warn(answer.get("warnings"))
         return answer
 
-    def evaluate_rows(self, slug, rows, version=None):
+    def evaluate_rows(self, slug, rows, version=None, output_units=None):
         """Evaluates many input sets in one request (at most 10,000); returns the results in order.
 
         >>> rs = c.evaluate_rows("pipe-turbulent-gnielinski", [{"Re_D": 1e4, "Pr": 3}, {"Re_D": 1e5, "Pr": 3}])
         >>> [r["outputs"]["Nu_D"] for r in rs]
         """
-        body = _body("rows", [_inputs(r) for r in rows], version)
+        body = _body("rows", [_inputs(r) for r in rows], version, output_units)
         answer = self._request("POST", f"/api/correlations/{urllib.parse.quote(slug)}/evaluate", body)
         self._warn(answer.get("warnings"))
         for r in answer["results"]:
             self._warn(r.get("warnings"))
         return answer["results"]
 
-    def run_template(self, slug, inputs, version=None):
+    def run_template(self, slug, inputs, version=None, output_units=None):
         """Runs a calculation template for one input set; the answer holds every step.
 
         >>> r = c.run_template("flat-plate-forced-convection-air", {"T_inf": (20, "degC"), "T_s": (60, "degC"), "p": (1, "atm"), "u_inf": 3, "L": 0.5, "W": 0.3})
         >>> r["outputs"]["h"]
         """
-        body = _body("inputs", _inputs(inputs), version)
+        body = _body("inputs", _inputs(inputs), version, output_units)
         answer = self._request("POST", f"/api/templates/{urllib.parse.quote(slug)}/run", body)
         self._warn(answer.get("warnings"))
         return answer

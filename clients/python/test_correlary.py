@@ -28,6 +28,12 @@ class AgainstTheApp(unittest.TestCase):
         self.assertRegex(r["contentHash"], r"^[0-9a-f]{64}$")
         self.assertEqual(r["warnings"], [])
 
+    def test_outputs_in_the_unit_asked_for(self):
+        r = self.c.evaluate("air-viscosity-sutherland", {"T": (15, "degC")}, output_units={"mu": "mPa s"})
+        # the same sea-level value as above, 1 mPa s = 1e-3 Pa s (SI prefixes, common practice)
+        self.assertAlmostEqual(r["outputs"]["mu"], 1.7894e-2, delta=2e-6)
+        self.assertEqual(r["units"]["mu"], "mPa s")
+
     def test_rows_in_order(self):
         rs = self.c.evaluate_rows("pipe-turbulent-gnielinski", [{"Re_D": 1e4, "Pr": 3}, {"Re_D": 1e5, "Pr": 3}])
         self.assertEqual(len(rs), 2)

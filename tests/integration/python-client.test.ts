@@ -23,7 +23,7 @@ describe('the Python client', () => {
       env: { ...process.env, CORRELARY_URL: BASE, CORRELARY_TOKEN: token, PYTHONPATH: 'clients/python', PYTHONDONTWRITEBYTECODE: '1' }, encoding: 'utf8',
     });
     expect(run.status, run.stderr).toBe(0);
-    expect(run.stderr).toMatch(/Ran 11 tests/);
+    expect(run.stderr).toMatch(/Ran 12 tests/);
     expect(run.stderr).toMatch(/\nOK\s*$/);
   });
 });
