@@ -5,6 +5,7 @@ import * as propertyTables from './20261202000050-property-tables-from-standards
 import * as templates from './20261202000100-calculation-templates';
 import * as demoCalculations from './20261202000200-demo-calculations';
 import * as libraryAdditions from './20261203000100-standard-library-additions';
+import * as libraryCorrections from './20261205000100-library-corrections';
 
 export interface Seeder {
   name: string;
@@ -13,4 +14,4 @@ export interface Seeder {
 }
 
 /** Seeders in order; tracked in their own table, so each runs once per database. */
-export const seeders: Seeder[] = [demoUsers, standardLibrary, demoScenario, propertyTables, templates, demoCalculations, libraryAdditions];
+export const seeders: Seeder[] = [demoUsers, standardLibrary, demoScenario, propertyTables, templates, demoCalculations, libraryAdditions, libraryCorrections];

@@ -67,6 +67,8 @@ const std = (slug: string, python: Record<string, string>, tolerance: number, po
   slug, kind: 'standard-formulation', python, tolerance, points, citation: '', why,
 });
 
+const STOKES = 'Stokes flow across a cylinder array by the cell model of Kuwabara, S. (1959) J. Phys. Soc. Japan 14(4):527–532 — validation/reference/formulas.ts';
+const STOKES_WHY = 'cell-model uncertainty 30 % (Happel’s 1959 cell, computed beside it, gives 24–30 % less drag at these solid fractions; cell models lose accuracy in dense arrays, so only φ ≤ 0.2 is used) combined with the correlation’s stated accuracy';
 const ML = 'Mixing-length solution of fully developed pipe flow (Nikuradse length, van Driest damping, Kays Pr_t) — validation/reference/turbulence.ts';
 const ML_WHY = 'mixing-length model uncertainty 10 % in Nu for 0.7 ≤ Pr ≤ 10 (from memory) combined with the correlation’s stated accuracy';
 const MLF_WHY = 'mixing-length model uncertainty 5 % in f (from memory) combined with the correlation’s stated accuracy';
@@ -388,6 +390,7 @@ export const PLAN: Planned[] = [
   cp('tube-bank-pressure-drop-jakob-aligned', 'isolated-cylinder-drag-row', 0.3, [{ Re_Dmax: 1e4, a: 3, b: 3, N_L: 10 }], 'Widely spaced tubes drag like isolated cylinders, C_D ≈ 1.2 for 10⁴ < Re < 2×10⁵ (common practice): Eu = C_D ((a − 1)/a)²/a on the narrowest-section velocity', 'wake shielding lowers an in-line row’s drag and blockage raises it: ±30 %'),
   xc('tube-bank-pressure-drop-gaddis-gnielinski-aligned', 'tube-bank-pressure-drop-jakob-aligned', [{ Re_Dmax: 5e3, a: 2, b: 2, N_L: 10 }, { Re_Dmax: 2e4, a: 1.5, b: 1.5, N_L: 10 }, { Re_Dmax: 3e4, a: 2.5, b: 1.5, N_L: 12 }]),
   cp('tube-bank-pressure-drop-gaddis-gnielinski-aligned', 'isolated-cylinder-drag-row', 0.3, [{ Re_Dmax: 1e4, a: 3, b: 3, N_L: 10 }], 'Widely spaced tubes drag like isolated cylinders, C_D ≈ 1.2 for 10⁴ < Re < 2×10⁵ (common practice): Eu = C_D ((a − 1)/a)²/a on the narrowest-section velocity', 'wake shielding lowers an in-line row’s drag and blockage raises it: ±30 %'),
+  ind('tube-bank-pressure-drop-gaddis-gnielinski-aligned', 'stokes-cell-kuwabara', 0.3, [{ Re_Dmax: 1, a: 3, b: 3, N_L: 10 }, { Re_Dmax: 1, a: 2.5, b: 2.5, N_L: 10 }, { Re_Dmax: 2, a: 2, b: 2, N_L: 10 }], STOKES, STOKES_WHY),
 
   // ——— pressure losses ———
   // The two contraction forms part ways for mild contractions: at β = 0.8 they differ by a factor of three (0.05 against 0.15).
