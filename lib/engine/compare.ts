@@ -90,9 +90,10 @@ export function compareDefinitions({ items, sweep, output, fixed, from, to, poin
   const ranges = items.map((it) => boundsOf(it.definition, sweep));
   const lo = from ?? Math.max(...ranges.map((r) => r.min ?? -Infinity));
   const hi = to ?? Math.min(...ranges.map((r) => r.max ?? Infinity));
-  if (!Number.isFinite(lo) || !Number.isFinite(hi) || !(lo < hi)) {
-    throw new Error(`the validity ranges of ${sweep} do not overlap; give an explicit range`);
+  if (!Number.isFinite(lo) || !Number.isFinite(hi)) {
+    throw new Error(`no validity range bounds ${sweep} on ${!Number.isFinite(lo) ? 'the low' : 'the high'} side; give an explicit range`);
   }
+  if (!(lo < hi)) throw new Error(`the validity ranges of ${sweep} do not overlap; give an explicit range`);
   const { xs, scale } = grid(lo, hi, Math.max(2, Math.min(points, 2000)));
   const series: CompareSeries[] = items.map((it, k) => {
     const c = compiled(it.definition);

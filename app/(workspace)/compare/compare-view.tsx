@@ -84,7 +84,7 @@ export function CompareView() {
                         <input className="field-input font-mono" value={fixed[s] ?? String(Number(typicalValue(defs.find((d) => d.definition.inputs.some((i) => i.symbol === s))!.definition, s).toPrecision(3)))} onChange={(e) => setFixed({ ...fixed, [s]: e.target.value })} />
                       </label>
                     ))}
-                    <button type="button" className="btn-primary w-full justify-center" disabled={run.isPending} onClick={() => run.mutate()}>Plot</button>
+                    <button type="button" className="btn-primary w-full justify-center" disabled={run.isPending || defs.length < picked.length} onClick={() => run.mutate()}>{defs.length < picked.length ? 'Loading the definitions…' : 'Plot'}</button>
                   </>
                 )}
               </div>
