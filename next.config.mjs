@@ -7,6 +7,7 @@ const nextConfig = {
   experimental: { turbopackFileSystemCacheForBuild: false },
   // Security headers on every answer. Everything is served from the app itself (fonts, KaTeX, the
   // Monaco editor and its workers); Next.js's hydration needs inline scripts, KaTeX and Monaco inline styles.
+  // object-src 'self': evidence documents (PDF) shown inline from /api/attachments.
   // 'unsafe-eval' is there because ajv compiles the check-case schema in the browser (the author's CSV
   // preview); precompiling it with ajv's standalone code would let the policy drop it.
   async headers() {
@@ -14,7 +15,7 @@ const nextConfig = {
     const csp = [
       "default-src 'self'", "script-src 'self' 'unsafe-inline' 'unsafe-eval'", "style-src 'self' 'unsafe-inline'",
       "img-src 'self' data: blob:", "font-src 'self' data:", `connect-src 'self'${dev ? ' ws:' : ''}`, "worker-src 'self' blob:",
-      "frame-ancestors 'none'", "base-uri 'self'", "form-action 'self'", "object-src 'none'",
+      "frame-ancestors 'none'", "base-uri 'self'", "form-action 'self'", "object-src 'self'",
     ].join('; ');
     return [{
       source: '/:path*',
@@ -24,6 +25,14 @@ const nextConfig = {
         { key: 'X-Content-Type-Options', value: 'nosniff' },
         { key: 'Referrer-Policy', value: 'same-origin' },
         { key: 'Permissions-Policy', value: 'camera=(), microphone=(), geolocation=()' },
+      ],
+    }, {
+      // Evidence documents open inline beside their check case (an <object> on the app's own pages): framing by the
+      // app itself only; the document may load nothing (an image shows itself, a PDF its own viewer).
+      source: '/api/attachments/:id',
+      headers: [
+        { key: 'Content-Security-Policy', value: "default-src 'none'; img-src 'self'; style-src 'unsafe-inline'; frame-ancestors 'self'" },
+        { key: 'X-Frame-Options', value: 'SAMEORIGIN' },
       ],
     }];
   },

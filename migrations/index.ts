@@ -8,6 +8,7 @@ import * as evidence from './20261202000300-evidence-policy';
 import * as webhooks from './20261203000100-webhooks';
 import * as librarySearch from './20261204000100-library-search-index';
 import * as mailClaims from './20261204000200-mail-claims';
+import * as attachments from './20261205000100-attachments';
 
 export interface Migration {
   name: string;
@@ -16,4 +17,4 @@ export interface Migration {
 }
 
 /** Every migration in order. Add new files here; the name is what the tracking table records. */
-export const migrations: Migration[] = [usersAndRoles, correlations, apiTokens, calculations, throttle, evidence, webhooks, librarySearch, mailClaims];
+export const migrations: Migration[] = [usersAndRoles, correlations, apiTokens, calculations, throttle, evidence, webhooks, librarySearch, mailClaims, attachments];

@@ -3,7 +3,7 @@ import { initUser, User, UserRole } from './user';
 import {
   initCorrelation, Correlation, CorrelationVersion, CheckCaseRow, ValidationRun, SignOff, VersionComment,
 } from './correlation';
-import { initRecords, AuditEvent, Notification, ApiToken } from './records';
+import { initRecords, AuditEvent, Notification, ApiToken, Attachment } from './records';
 import { initCalculation, Project, ProjectMember, Calculation, CalculationRevision, CalculationUse, TemplateDependency } from './calculation';
 
 let ready = false;
@@ -28,13 +28,13 @@ export function db() {
   }
   return {
     sequelize, User, UserRole, Correlation, CorrelationVersion, CheckCaseRow, ValidationRun, SignOff,
-    VersionComment, AuditEvent, Notification, ApiToken, Project, ProjectMember, Calculation, CalculationRevision,
+    VersionComment, AuditEvent, Notification, ApiToken, Attachment, Project, ProjectMember, Calculation, CalculationRevision,
     CalculationUse, TemplateDependency,
   };
 }
 
 export { User, UserRole, Correlation, CorrelationVersion, CheckCaseRow, ValidationRun, SignOff, VersionComment,
-  AuditEvent, Notification, ApiToken };
+  AuditEvent, Notification, ApiToken, Attachment };
 export { Project, ProjectMember, Calculation, CalculationRevision, CalculationUse, TemplateDependency };
 export { PROJECT_ROLES, type ProjectRole } from './calculation';
 export { ROLES, type Role } from './user';

@@ -46,9 +46,34 @@ export class ApiToken extends Model<InferAttributes<ApiToken>, InferCreationAttr
   declare createdAt: CreationOptional<Date>;
 }
 
+/** An evidence document in object storage (bytes under object_key, named by their SHA-256). */
+export class Attachment extends Model<InferAttributes<Attachment>, InferCreationAttributes<Attachment>> {
+  declare id: string;
+  declare sha256: string;
+  declare mediaType: string;
+  declare name: string;
+  declare size: number;
+  declare objectKey: string;
+  declare uploadedBy: number;
+  declare createdAt: CreationOptional<Date>;
+}
+
 const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true };
 
 export function initRecords(sequelize: Sequelize) {
+  Attachment.init(
+    {
+      id: { type: DataTypes.CHAR(36), primaryKey: true },
+      sha256: { type: DataTypes.CHAR(64), allowNull: false },
+      mediaType: { type: DataTypes.STRING(40), allowNull: false },
+      name: { type: DataTypes.STRING(200), allowNull: false },
+      size: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+      objectKey: { type: DataTypes.STRING(200), allowNull: false },
+      uploadedBy: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+      createdAt: DataTypes.DATE(3),
+    },
+    { sequelize, tableName: 'attachments', underscored: true, updatedAt: false },
+  );
   AuditEvent.init(
     {
       id: { type: DataTypes.BIGINT.UNSIGNED, autoIncrement: true, primaryKey: true },

@@ -1,5 +1,5 @@
 // npm run audit:verify: walks the audit hash chain and re-hashes every frozen version and saved
-// calculation; exits 1 and names the first broken link or every record that no longer matches.
+// calculation and every evidence document a frozen version names; exits 1 and names the first broken link or every record that no longer matches.
 import { closeSequelize } from '@/lib/db/connection';
 import { verifyAuditChain } from '@/lib/audit/log';
 import { verifyAllContent } from '@/lib/governance/content-check';
@@ -12,7 +12,7 @@ async function main() {
     process.exitCode = 1;
   }
   const c = await verifyAllContent();
-  if (c.mismatches.length === 0) console.log(`Content hashes intact: ${c.versions} frozen versions, ${c.revisions} calculation revisions.`);
+  if (c.mismatches.length === 0) console.log(`Content hashes intact: ${c.versions} frozen versions, ${c.revisions} calculation revisions, ${c.attachments} evidence documents.`);
   else {
     console.error(`Content hash MISMATCH in ${c.mismatches.length} record(s): ${c.mismatches.slice(0, 20).join('; ')}`);
     process.exitCode = 1;

@@ -23,5 +23,9 @@ export DB_BENCH_NAME="${DB_BENCH_NAME:-correlary_bench}"
 export DB_USER="${DB_USER:-correlary}"
 export SMTP_HOST="${SMTP_HOST:-127.0.0.1}"
 export SMTP_PORT="${SMTP_PORT:-2525}"
+# Evidence documents: the local S3 stand-in (scripts/fake-s3.ts) unless S3_ENDPOINT points at a real store.
+export S3_PORT="${S3_PORT:-4568}"
+export S3_ENDPOINT="${S3_ENDPOINT:-http://127.0.0.1:$S3_PORT}"
+export S3_BUCKET="${S3_BUCKET:-correlary-evidence}"
 export NEXT_TELEMETRY_DISABLED=1
 export DATA_DIR="$ROOT/.data"

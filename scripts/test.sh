@@ -35,6 +35,10 @@ bash scripts/db.sh reset-test
 export DB_NAME="$DB_TEST_NAME"
 export SMTP_PORT="${TEST_SMTP_PORT:-2526}"
 export MAIL_DIR="$DATA_DIR/mail-test"
+export S3_PORT="${TEST_S3_PORT:-4569}"
+export S3_ENDPOINT="http://127.0.0.1:$S3_PORT"
+export S3_BUCKET="correlary-evidence-test"
+export S3_DIR="$DATA_DIR/s3-test"
 export TEST_PORT="${TEST_PORT:-3100}"
 export TEST_BASE_URL="http://127.0.0.1:$TEST_PORT"
 export NEXTAUTH_URL="$TEST_BASE_URL"
@@ -42,7 +46,7 @@ export RATE_LIMIT_PER_MINUTE="${RATE_LIMIT_PER_MINUTE:-100000}"
 # Webhook retries in a test run: the first retry after 0.3 s, the queue looked at every 0.2 s.
 export WEBHOOK_RETRY_BASE_MS="${WEBHOOK_RETRY_BASE_MS:-300}"
 export WEBHOOK_POLL_MS="${WEBHOOK_POLL_MS:-200}"
-rm -rf "$MAIL_DIR" && mkdir -p "$MAIL_DIR"
+rm -rf "$MAIL_DIR" "$S3_DIR" && mkdir -p "$MAIL_DIR" "$S3_DIR"
 
 PIDS=()
 cleanup() {
@@ -54,6 +58,9 @@ trap cleanup EXIT
 
 node --import tsx scripts/fake-smtp.ts >"$DATA_DIR/fake-smtp-test.log" 2>&1 &
 PIDS+=($!)
+node --import tsx scripts/fake-s3.ts >"$DATA_DIR/fake-s3-test.log" 2>&1 &
+PIDS+=($!)
+for _ in $(seq 1 40); do (exec 3<>"/dev/tcp/127.0.0.1/$S3_PORT") 2>/dev/null && break; sleep 0.25; done
 
 echo "== type-check"
 ./node_modules/.bin/tsc --noEmit

@@ -8,6 +8,7 @@ import { SOURCE_KINDS, type CheckCase, type Definition, type SourceKind } from '
 import type { ValidationReport } from '@/lib/engine/validate';
 import { NumberCell } from '@/components/ui/number-cell';
 import { Sym } from '@/components/ui/sym';
+import { EvidenceDocument } from './evidence-document';
 
 /** What each kind of source means, in a word, for the select's options. */
 const KIND_HINT: Record<SourceKind, string> = {
@@ -144,6 +145,7 @@ export function CheckCaseTable({ definition, cases, onChange, report, onPending 
                           <input aria-label={`${name} symbols whose warning it expects`} className="field-input font-mono" placeholder="expects warning for (symbols)" value={(c.expectWarnings ?? []).join(' ')}
                             onChange={(e) => { const w = e.target.value.split(/[\s,]+/).filter(Boolean); set(k, { expectWarnings: w.length ? w : undefined }); }} />
                         </div>
+                        <div className="mt-1"><EvidenceDocument label={name} value={c.source.attachment} onChange={(attachment) => set(k, { source: { ...c.source, attachment } })} /></div>
                         <input aria-label={`${name} why this tolerance`} className="field-input mt-1" placeholder="why this tolerance (e.g. the stated accuracies of both correlations)" value={c.tolerance.why ?? ''} onChange={(e) => set(k, { tolerance: { ...c.tolerance, why: e.target.value || undefined } })} />
                         {problems.length > 0 && <p className="mt-1 text-xs text-danger" data-testid={`case-problems-${k}`}>To finish this case: {problems.join('; ')}.</p>}
                         {result && !result.passed && <p className="mt-1 text-xs text-danger">{result.problems.length ? result.problems.join('; ') : 'The formula does not reproduce this value within the tolerance.'}</p>}

@@ -62,7 +62,7 @@ export function ValidationReportView({ report, checkCases, title = 'Validation r
                   {report.cases.flatMap((c) => (c.outputs.length ? c.outputs : [null]).map((o, k) => (
                     <tr key={`${c.index}-${k}`} className={c.passed ? '' : 'bg-danger-bg'}>
                       {k === 0 && <td rowSpan={Math.max(1, c.outputs.length)}>{c.label}{c.expectedWarnings.length > 0 && <div className="text-xs text-caution">expects warning on {c.expectedWarnings.join(', ')}</div>}{c.problems.map((p, j) => <div key={j} className="text-xs text-danger">{p}</div>)}</td>}
-                      {k === 0 && <td rowSpan={Math.max(1, c.outputs.length)} className="max-w-xs text-xs"><span className="font-medium">{c.sourceKind}</span> — {c.citation}{c.locator && `, ${c.locator}`}</td>}
+                      {k === 0 && <td rowSpan={Math.max(1, c.outputs.length)} className="max-w-xs text-xs"><span className="font-medium">{c.sourceKind}</span> — {c.citation}{c.locator && `, ${c.locator}`}{checkCases[c.index]?.source.attachment && <> · <a className="text-brand-dark underline" href={`#document-${c.index}`}>source document</a></>}</td>}
                       <td className="font-mono text-xs">{o?.symbol ?? '—'}</td>
                       <td className="font-mono text-xs">{formatNumber(o?.computed ?? null, 7)}</td>
                       <td className="font-mono text-xs">{o ? formatNumber(o.expected, 7) : '—'}</td>
@@ -75,8 +75,33 @@ export function ValidationReportView({ report, checkCases, title = 'Validation r
               </table>
             </div>
           )}
+          <SourceDocuments checkCases={checkCases} />
         </>
       )}
     </section>
+  );
+}
+
+/** The evidence documents behind the check cases, each openable inline (images and PDF pages) beside its case. */
+function SourceDocuments({ checkCases }: { checkCases: CheckCase[] }) {
+  const docs = checkCases.map((c, index) => ({ c, index, a: c.source.attachment })).filter((d) => d.a);
+  if (!docs.length) return null;
+  return (
+    <div className="space-y-2" aria-label="Source documents" role="region">
+      <h3 className="text-sm font-semibold">Source documents ({docs.length})</h3>
+      {docs.map(({ c, index, a }) => (
+        <details key={index} id={`document-${index}`} className="rounded border border-line p-2 text-sm">
+          <summary className="cursor-pointer">
+            <span className="font-medium">{c.label}</span> — {a!.name} <span className="font-mono text-xs text-ink-faint" title={`SHA-256 ${a!.sha256}`}>sha256 {a!.sha256.slice(0, 12)}…</span>
+          </summary>
+          <div className="mt-2 space-y-1">
+            {a!.mediaType === 'application/pdf'
+              ? <object data={`/api/attachments/${a!.id}`} type="application/pdf" className="h-[32rem] w-full rounded border border-line" aria-label={`${a!.name}, the source of ${c.label}`}><p>Your browser shows no PDFs here; <a className="underline" href={`/api/attachments/${a!.id}`}>open the document</a>.</p></object>
+              : <img src={`/api/attachments/${a!.id}`} alt={`${a!.name}, the source of ${c.label}`} className="max-h-[32rem] max-w-full rounded border border-line" />}
+            <a className="text-xs text-brand-dark underline" href={`/api/attachments/${a!.id}`} target="_blank" rel="noreferrer">Open {a!.name} in a new tab</a>
+          </div>
+        </details>
+      ))}
+    </div>
   );
 }

@@ -294,3 +294,13 @@ export const listWebhooksQuery = z.object({ all: z.enum(['1', '0']).optional() }
 export const allowlistBody = z.object({
   prefixes: z.array(z.string().trim().min(1, 'An empty prefix').max(300, 'A prefix is too long (300 characters at most)')).max(50, 'At most 50 prefixes'),
 }).strict();
+
+/** An evidence document, base64-encoded in JSON (keeps every signed-in change a same-origin JSON request). */
+export const attachmentBody = z.object({
+  name: z.string().trim().min(1, 'Give the file name').max(300, 'At most 300 characters'),
+  content: z.string().min(1, 'The file is empty').max(7_000_000, 'At most 5 MB of document (base64-encoded)').describe('the file\'s bytes, base64-encoded; PDF, PNG or JPEG, detected from the content'),
+});
+export const attachmentAnswer = z.object({
+  id: z.string().uuid(), sha256: z.string().regex(/^[0-9a-f]{64}$/), mediaType: z.enum(['application/pdf', 'image/png', 'image/jpeg']), name: z.string(), size: z.number().int(),
+});
+export const attachmentParam = z.object({ id: z.string().uuid('must be an evidence document id (a UUID)') });

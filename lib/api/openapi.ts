@@ -4,6 +4,7 @@ import {
   createCorrelationBody, updateDraftBody, decisionBody, withdrawBody, compareBody,
   templatesQuery, templateListAnswer, runBody, runAnswer, idParam, createProjectBody, memberBody, saveCalculationBody,
   calculationsQuery, calculationQuery, webhookListAnswer, registerWebhookAnswer, webhookDeliveriesAnswer, webhookDeliveryBody, allowlistAnswer, allowlistBody, deliveryParams, listWebhooksQuery, registerWebhookBody, webhookIdParams,
+  attachmentBody, attachmentAnswer, attachmentParam,
 } from './contract';
 import { EXAMPLES } from './openapi-examples';
 
@@ -82,7 +83,7 @@ export function openApiDocument(serverUrl: string) {
     400: 'Malformed request (not JSON, empty body)', 401: 'No valid session or API token', 403: 'Authenticated but not allowed (role or token scope)',
     404: 'Unknown correlation or version, or not visible to the caller', 409: 'Conflicting state (frozen, already decided, integrity alarm)',
     413: 'Body or batch too large', 422: 'Body, query or inputs failed validation; details.issues names each field', 429: 'Rate limit reached; see Retry-After',
-    503: 'The evaluation pool is busy; see Retry-After',
+    503: 'Busy or a backing service (database, evaluation pool, document store) unreachable; see Retry-After',
   };
   const vp = params(versionPath, 'path');
   const cp = params(correlationPath, 'path');
@@ -123,6 +124,12 @@ export function openApiDocument(serverUrl: string) {
       responses: Object.fromEntries(Object.entries(describedErrors).map(([code, description]) => [`E${code}`, { description, content: { 'application/json': { schema: { $ref: '#/components/schemas/Error' } } } }])),
     },
     paths: {
+      '/api/attachments': {
+        post: op({ id: 'uploadAttachment', tag: 'Review', summary: 'Upload an evidence document', description: 'Authors only (token scope write). A PDF excerpt or a scan of a table page behind a check case: the type is detected from the content (PDF, PNG, JPEG), at most 5 MB, sent base64-encoded in JSON. Name the answer as a check case source\'s attachment; its SHA-256 becomes part of the version\'s content hash.', body: { schema: attachmentBody, example: { name: 'rig-table-3.pdf', content: 'JVBERi0xLjQK…' } }, ok: { description: 'Stored', schema: attachmentAnswer, example: { id: '6f1c2b1e-3d0a-4c55-9a55-2f8f4f5d7e21', sha256: 'a'.repeat(64), mediaType: 'application/pdf', name: 'rig-table-3.pdf', size: 48213 } }, fail: [400, 401, 403, 413, 422, 503] }),
+      },
+      '/api/attachments/{id}': {
+        get: op({ id: 'getAttachment', tag: 'Correlations', summary: 'An evidence document', description: 'For those who may read a version whose check cases name it (and its uploader). The stored bytes are re-hashed before they are served; a mismatch raises the integrity alarm and answers 409.', params: params(attachmentParam, 'path'), ok: { description: 'The document', content: { 'application/pdf': { schema: { type: 'string', format: 'binary' } }, 'image/png': { schema: { type: 'string', format: 'binary' } }, 'image/jpeg': { schema: { type: 'string', format: 'binary' } } } }, fail: [401, 403, 404, 409, 422, 503] }),
+      },
       '/api/correlations': {
         get: op({ id: 'listCorrelations', tag: 'Correlations', summary: 'List correlations', description: 'Pages of the library, filtered by words, category, situation, evidence grade and status; sorted by title, category, date or slug. Drafts and versions in review only show to their authors and approvers.', params: params(listQuery, 'query'), ok: { description: 'A page of correlations', schema: listAnswer, example: EXAMPLES.listAnswer }, fail: [401, 403, 422, 429] }),
         post: op({ id: 'createCorrelation', tag: 'Review', summary: 'Create a correlation with its first draft', description: 'Authors only (token scope write). The definition and check cases are stored as draft version 1; nothing is validated until submission.', body: { schema: createCorrelationBody, example: { slug: 'my-correlation', definition: EXAMPLES.versionAnswer.definition, checkCases: [] } }, ok: { description: 'Created', schema: ack, example: { slug: 'my-correlation', version: 1 } }, fail: [400, 401, 403, 409, 413, 422] }),

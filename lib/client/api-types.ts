@@ -51,6 +51,46 @@ export interface paths {
         patch?: never;
         trace?: never;
     };
+    "/api/attachments": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        get?: never;
+        put?: never;
+        /**
+         * Upload an evidence document
+         * @description Authors only (token scope write). A PDF excerpt or a scan of a table page behind a check case: the type is detected from the content (PDF, PNG, JPEG), at most 5 MB, sent base64-encoded in JSON. Name the answer as a check case source's attachment; its SHA-256 becomes part of the version's content hash.
+         */
+        post: operations["uploadAttachment"];
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
+    "/api/attachments/{id}": {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        /**
+         * An evidence document
+         * @description For those who may read a version whose check cases name it (and its uploader). The stored bytes are re-hashed before they are served; a mismatch raises the integrity alarm and answers 409.
+         */
+        get: operations["getAttachment"];
+        put?: never;
+        post?: never;
+        delete?: never;
+        options?: never;
+        head?: never;
+        patch?: never;
+        trace?: never;
+    };
     "/api/calculations": {
         parameters: {
             query?: never;
@@ -734,7 +774,7 @@ export interface components {
                 "application/json": components["schemas"]["Error"];
             };
         };
-        /** @description The evaluation pool is busy; see Retry-After */
+        /** @description Busy or a backing service (database, evaluation pool, document store) unreachable; see Retry-After */
         E503: {
             headers: {
                 [name: string]: unknown;
@@ -954,6 +994,79 @@ export interface operations {
             404: components["responses"]["E404"];
             422: components["responses"]["E422"];
             429: components["responses"]["E429"];
+            503: components["responses"]["E503"];
+        };
+    };
+    uploadAttachment: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path?: never;
+            cookie?: never;
+        };
+        requestBody: {
+            content: {
+                "application/json": {
+                    /** @description the file's bytes, base64-encoded; PDF, PNG or JPEG, detected from the content */
+                    content: string;
+                    name: string;
+                };
+            };
+        };
+        responses: {
+            /** @description Stored */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/json": {
+                        /** Format: uuid */
+                        id: string;
+                        /** @enum {string} */
+                        mediaType: "application/pdf" | "image/png" | "image/jpeg";
+                        name: string;
+                        sha256: string;
+                        size: number;
+                    };
+                };
+            };
+            400: components["responses"]["E400"];
+            401: components["responses"]["E401"];
+            403: components["responses"]["E403"];
+            413: components["responses"]["E413"];
+            422: components["responses"]["E422"];
+            503: components["responses"]["E503"];
+        };
+    };
+    getAttachment: {
+        parameters: {
+            query?: never;
+            header?: never;
+            path: {
+                /** @description the record number */
+                id: string;
+            };
+            cookie?: never;
+        };
+        requestBody?: never;
+        responses: {
+            /** @description The document */
+            200: {
+                headers: {
+                    [name: string]: unknown;
+                };
+                content: {
+                    "application/pdf": string;
+                    "image/jpeg": string;
+                    "image/png": string;
+                };
+            };
+            401: components["responses"]["E401"];
+            403: components["responses"]["E403"];
+            404: components["responses"]["E404"];
+            409: components["responses"]["E409"];
+            422: components["responses"]["E422"];
             503: components["responses"]["E503"];
         };
     };

@@ -152,7 +152,8 @@ export interface CheckCase {
   /** Expected values per output symbol (in the output's declared unit). */
   expected: Record<string, number>;
   tolerance: { rel?: number; abs?: number; why?: string };
-  source: { kind: SourceKind; citation: string; locator?: string };
+  /** attachment: the evidence document behind the value (its SHA-256 is part of the version's content hash). */
+  source: { kind: SourceKind; citation: string; locator?: string; attachment?: { id: string; sha256: string; mediaType: string; name: string } };
   /** Symbols whose limits this case is meant to break; absent means none. */
   expectWarnings?: string[];
   /** The case is meant to hit a `refuse` limit. */

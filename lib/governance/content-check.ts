@@ -3,9 +3,10 @@ import { db } from '@/models';
 import { contentHash } from '@/lib/engine/canonical';
 import { revisionHash } from '@/lib/calculations/records';
 import { checkCasesOfVersion } from './check-cases';
+import { verifyAttachments } from '@/lib/evidence/attachments';
 
-/** Every frozen version and saved calculation revision re-hashed from what the database holds. */
-export async function verifyAllContent(): Promise<{ versions: number; revisions: number; mismatches: string[] }> {
+/** Every frozen version and saved calculation revision re-hashed from what the database holds, and every evidence document they name from the store. */
+export async function verifyAllContent(): Promise<{ versions: number; revisions: number; attachments: number; mismatches: string[] }> {
   const { sequelize, CalculationRevision } = db();
   const rows = await sequelize.query<{ id: number; slug: string; version: number; content_hash: string; definition: string }>(
     `SELECT v.id, c.slug, v.version, v.content_hash, v.definition FROM correlation_versions v JOIN correlations c ON c.id = v.correlation_id
@@ -24,5 +25,7 @@ export async function verifyAllContent(): Promise<{ versions: number; revisions:
       after = rev.id;
     }
   }
-  return { versions: rows.length, revisions, mismatches };
+  const documents = await verifyAttachments();
+  mismatches.push(...documents.mismatches);
+  return { versions: rows.length, revisions, attachments: documents.checked, mismatches };
 }

@@ -1,3 +1,4 @@
+import { assertAttachmentRefs } from '@/lib/evidence/attachments';
 import { Op, type Transaction } from 'sequelize';
 import { db, type CorrelationVersion, type Correlation } from '@/models';
 import { AppError } from '@/lib/http/errors';
@@ -118,6 +119,7 @@ export async function createCorrelation({ actor, slug, definition, checkCases }:
     throw new AppError('invalid:slug', 'The slug must be lower-case words joined by hyphens, e.g. "cylinder-crossflow-hilpert".', { issues: [{ path: 'slug', message: 'lower-case letters, digits and hyphens only' }] });
   }
   assertSchemaValid(definition, checkCases, kind);
+  await assertAttachmentRefs(actor, checkCases);
   const { sequelize, Correlation, CorrelationVersion } = db();
   return sequelize.transaction(async (transaction) => {
     if (await Correlation.findOne({ where: { slug }, transaction })) {
@@ -178,7 +180,10 @@ export async function updateDraft({ actor, slug, version, definition, checkCases
       // Only the owner renames the entry, and only while nothing of it is published.
       if (c.ownerId === actor.id && (version === 1 || !(await hasPublished(c.id, transaction)))) await Correlation.update(correlationMeta(definition), { where: { id: c.id }, transaction });
     }
-    if (checkCases !== undefined) await replaceCheckCases(v.id, checkCases as CheckCase[], transaction);
+    if (checkCases !== undefined) {
+      await assertAttachmentRefs(actor, checkCases, transaction);
+      await replaceCheckCases(v.id, checkCases as CheckCase[], transaction);
+    }
     await appendAuditEvent({ transaction, event: { actorId: actor.id, action: 'version.edited', entityType: 'version', entityId: `${slug}@${version}`, details: { definition: definition !== undefined, checkCases: checkCases?.length ?? null } } });
     return { slug, version };
   });

@@ -36,6 +36,8 @@ export const ACCESS = {
   'POST /api/calculations/{id}/rerun': { scope: 'evaluate' },
   // Authoring: authors; tokens with "write".
   'POST /api/correlations': { roles: ['author'], scope: 'write' },
+  'POST /api/attachments': { roles: ['author'], scope: 'write' },
+  'GET /api/attachments/{id}': { scope: 'read' },
   'POST /api/correlations/{slug}/versions': { roles: ['author'], scope: 'write' },
   'PATCH /api/correlations/{slug}/versions/{n}': { roles: ['author'], scope: 'write' },
   'POST /api/correlations/{slug}/versions/{n}/submit': { roles: ['author'], scope: 'write' },

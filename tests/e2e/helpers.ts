@@ -20,7 +20,8 @@ export function guardOffline(page: Page): string[] {
   page.on('console', (msg) => { if (msg.type() === 'error' && /Content Security Policy/i.test(msg.text())) outside.push(`CSP: ${msg.text()}`); });
   page.on('request', (req) => {
     const url = new URL(req.url());
-    if (!['127.0.0.1', 'localhost', '[::1]'].includes(url.hostname) && !['data:', 'blob:'].includes(url.protocol)) outside.push(req.url());
+    // chrome: and chrome-extension: are the browser's own built-in PDF viewer, loaded from the browser, not the network.
+    if (!['127.0.0.1', 'localhost', '[::1]'].includes(url.hostname) && !['data:', 'blob:', 'chrome:', 'chrome-extension:'].includes(url.protocol)) outside.push(req.url());
   });
   return outside;
 }

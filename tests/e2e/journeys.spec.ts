@@ -1,4 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
+import { simplePdf } from '@/lib/evidence/demo-document';
 import { checkScreen, guardOffline, signInAs, DEMO_PASSWORD } from './helpers';
 
 test.describe.configure({ mode: 'serial' });
@@ -67,6 +68,11 @@ test('an author writes a correlation from its formula, types, pastes and uploads
   await expect(page.getByTestId('case-problems-0')).toHaveCount(0);
   await page.getByRole('button', { name: 'Duplicate low' }).click();
   await page.getByRole('button', { name: 'Delete low (copy)' }).click();
+  // The source document: a text file named .pdf is refused by its content; a real PDF is attached and linked.
+  await page.getByLabel('Source document of low').setInputFiles({ name: 'notes.pdf', mimeType: 'application/pdf', buffer: Buffer.from('plain text, not a PDF') });
+  await expect(page.getByRole('alert').filter({ hasText: 'attach a PDF, PNG or JPEG' })).toBeVisible();
+  await page.getByLabel('Source document of low').setInputFiles({ name: 'worked-value.pdf', mimeType: 'application/pdf', buffer: Buffer.from(simplePdf(['Journey test: the worked value (invented)'])) });
+  await expect(page.getByTestId('attachment-link')).toHaveText('worked-value.pdf');
   await checkScreen(page, 'author-cases-typed');
 
   await page.getByLabel(/Or paste rows copied from a spreadsheet/).fill('label\tRe_D\texpected:Nu_D\trel\tsource_kind\tcitation\nmid\t1e4\t30\t1e-9\ttranscription\tarithmetic of 0.3 Re^0.5\n');

@@ -1,4 +1,4 @@
-import { test } from '@playwright/test';
+import { expect, test } from '@playwright/test';
 import { checkScreen, guardOffline, signInAs } from './helpers';
 
 /**
@@ -30,4 +30,21 @@ for (const [who, paths] of Object.entries(SCREENS)) {
 test('the sign-in screen passes the accessibility checks', async ({ page }) => {
   await page.goto('/sign-in');
   await checkScreen(page, 'sign-in');
+});
+
+test('an engineer opens the source document behind a check case, inline beside the case', async ({ page }) => {
+  const outside = guardOffline(page);
+  await signInAs(page, 'engineer');
+  await page.goto('/correlations/brightwater-cp3-cold-plate-channel');
+  const docs = page.getByRole('region', { name: 'Source documents' });
+  await expect(docs).toContainText('BTS-TR-2026-030 table 2 (invented demo).pdf');
+  await docs.getByText('run 5').click();
+  const pdf = docs.getByLabel(/the source of run 5/);
+  await expect(pdf).toBeVisible();
+  // What the browser shows is what was uploaded: the store's bytes, served with their type, start as a PDF.
+  const answer = await page.request.get(await pdf.getAttribute('data') ?? '');
+  expect(answer.headers()['content-type']).toBe('application/pdf');
+  expect((await answer.body()).subarray(0, 5).toString('latin1')).toBe('%PDF-');
+  await checkScreen(page, 'engineer-source-document');
+  expect(outside).toEqual([]);
 });

@@ -133,7 +133,8 @@ describe('security: tokens, ownership, cross-site requests, bounded answers, hea
   });
 
   it('11: the documented commands work from a fresh shell with nothing but PATH and HOME set', () => {
-    const env = { PATH: process.env.PATH!, HOME: process.env.HOME ?? '/root', DB_NAME: process.env.DB_NAME! } as unknown as NodeJS.ProcessEnv;
+    // Which installation: the test database and its document store, as DB_NAME alone would name the database.
+    const env = { PATH: process.env.PATH!, HOME: process.env.HOME ?? '/root', DB_NAME: process.env.DB_NAME!, S3_ENDPOINT: process.env.S3_ENDPOINT!, S3_BUCKET: process.env.S3_BUCKET! } as unknown as NodeJS.ProcessEnv;
     expect(execFileSync('npm', ['run', '-s', 'audit:verify'], { env, encoding: 'utf8' })).toMatch(/Audit chain intact: \d+ events/);
     const out = execFileSync('npm', ['run', '-s', 'token', '--', 'create', '--email', 'integrator@demo.example', '--name', 'fresh shell', '--scopes', 'read'], { env, encoding: 'utf8' });
     expect(out.trim().split('\n').at(-1)).toMatch(/^crl_/);

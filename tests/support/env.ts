@@ -13,3 +13,6 @@ process.env.DB_NAME = process.env.DB_TEST_NAME ?? 'correlary_test';
 process.env.TEST_BASE_URL ??= 'http://127.0.0.1:3100';
 process.env.MAIL_DIR ??= join(process.cwd(), '.data', 'mail-test');
 process.env.SMTP_PORT ??= '2526';
+// The test run's own document store (scripts/test.sh starts it on this port with this bucket).
+process.env.S3_ENDPOINT ??= `http://127.0.0.1:${process.env.TEST_S3_PORT ?? '4569'}`;
+process.env.S3_BUCKET ??= 'correlary-evidence-test';
