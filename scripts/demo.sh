@@ -15,6 +15,7 @@ if ! (exec 3<>"/dev/tcp/127.0.0.1/$SMTP_PORT") 2>/dev/null; then
   echo "Fake SMTP server started on 127.0.0.1:$SMTP_PORT (mail kept in .data/mail)"
 fi
 bash scripts/s3.sh
+bash scripts/oidc.sh
 bash scripts/tsx.sh scripts/migrate.ts up
 bash scripts/tsx.sh scripts/seed.ts up
 echo "Building the application…"

@@ -27,5 +27,10 @@ export SMTP_PORT="${SMTP_PORT:-2525}"
 export S3_PORT="${S3_PORT:-4568}"
 export S3_ENDPOINT="${S3_ENDPOINT:-http://127.0.0.1:$S3_PORT}"
 export S3_BUCKET="${S3_BUCKET:-correlary-evidence}"
+# Company sign-in: the local OpenID provider (scripts/fake-oidc.ts) unless OIDC_ISSUER points at the real one.
+export OIDC_PORT="${OIDC_PORT:-4700}"
+export OIDC_ISSUER="${OIDC_ISSUER:-http://127.0.0.1:$OIDC_PORT}"
+export OIDC_CLIENT_ID="${OIDC_CLIENT_ID:-correlary}"
+export OIDC_CLIENT_SECRET="${OIDC_CLIENT_SECRET:-correlary-demo-oidc-secret}"
 export NEXT_TELEMETRY_DISABLED=1
 export DATA_DIR="$ROOT/.data"

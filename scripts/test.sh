@@ -39,14 +39,18 @@ export S3_PORT="${TEST_S3_PORT:-4569}"
 export S3_ENDPOINT="http://127.0.0.1:$S3_PORT"
 export S3_BUCKET="correlary-evidence-test"
 export S3_DIR="$DATA_DIR/s3-test"
+export OIDC_PORT="${TEST_OIDC_PORT:-4701}"
+export OIDC_ISSUER="http://127.0.0.1:$OIDC_PORT"
+export OIDC_DIRECTORY="$DATA_DIR/oidc-directory-test.json"
 export TEST_PORT="${TEST_PORT:-3100}"
 export TEST_BASE_URL="http://127.0.0.1:$TEST_PORT"
 export NEXTAUTH_URL="$TEST_BASE_URL"
+export OIDC_REDIRECT_URIS="$NEXTAUTH_URL/api/auth/callback/company"
 export RATE_LIMIT_PER_MINUTE="${RATE_LIMIT_PER_MINUTE:-100000}"
 # Webhook retries in a test run: the first retry after 0.3 s, the queue looked at every 0.2 s.
 export WEBHOOK_RETRY_BASE_MS="${WEBHOOK_RETRY_BASE_MS:-300}"
 export WEBHOOK_POLL_MS="${WEBHOOK_POLL_MS:-200}"
-rm -rf "$MAIL_DIR" "$S3_DIR" && mkdir -p "$MAIL_DIR" "$S3_DIR"
+rm -rf "$MAIL_DIR" "$S3_DIR" "$OIDC_DIRECTORY" && mkdir -p "$MAIL_DIR" "$S3_DIR"
 
 PIDS=()
 cleanup() {
@@ -60,7 +64,11 @@ node --import tsx scripts/fake-smtp.ts >"$DATA_DIR/fake-smtp-test.log" 2>&1 &
 PIDS+=($!)
 node --import tsx scripts/fake-s3.ts >"$DATA_DIR/fake-s3-test.log" 2>&1 &
 PIDS+=($!)
-for _ in $(seq 1 40); do (exec 3<>"/dev/tcp/127.0.0.1/$S3_PORT") 2>/dev/null && break; sleep 0.25; done
+node --import tsx scripts/fake-oidc.ts >"$DATA_DIR/fake-oidc-test.log" 2>&1 &
+PIDS+=($!)
+for port in "$S3_PORT" "$OIDC_PORT"; do
+  for _ in $(seq 1 40); do (exec 3<>"/dev/tcp/127.0.0.1/$port") 2>/dev/null && break; sleep 0.25; done
+done
 
 echo "== type-check"
 ./node_modules/.bin/tsc --noEmit

@@ -3,7 +3,7 @@ import 'next-auth/jwt';
 
 declare module 'next-auth' {
   interface Session {
-    user: { id: number; roles: string[]; sv: number; name?: string | null; email?: string | null; image?: string | null };
+    user: { id: number; roles: string[]; sv: number; via?: 'password' | 'company'; authAt?: number; name?: string | null; email?: string | null; image?: string | null };
   }
 }
 
@@ -12,5 +12,8 @@ declare module 'next-auth/jwt' {
     uid?: number;
     roles?: string[];
     sv?: number;
+    /** How the person signed in, and when (Unix seconds): a company-account signature is a fresh sign-in at the provider. */
+    via?: 'password' | 'company';
+    authAt?: number;
   }
 }

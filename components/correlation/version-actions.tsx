@@ -1,6 +1,7 @@
 'use client';
 
 import Link from 'next/link';
+import { CompanySignature, useCompanySignature, useDraftAcrossSignIn } from '@/components/review/company-signature';
 import { useRouter } from 'next/navigation';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
@@ -35,6 +36,8 @@ export function VersionActions({ detail, user }: { detail: VersionDetail; user: 
   const [password, setPassword] = useState('');
   const [open, setOpen] = useState(false);
   const [done, setDone] = useState<string | null>(null);
+  const signature = useCompanySignature();
+  const keepDraft = useDraftAcrossSignIn(`withdraw:${detail.slug}:${detail.version}`, { reason }, (d) => { setReason(d.reason); setOpen(true); });
   const isAuthor = user.roles.includes('author');
   const isApprover = user.roles.includes('approver');
   const newVersion = useMutation({
@@ -69,9 +72,11 @@ export function VersionActions({ detail, user }: { detail: VersionDetail; user: 
           <label htmlFor="withdraw-reason" className="block text-sm font-medium">Reason for withdrawal (sent to everyone who used this version)</label>
           <textarea id="withdraw-reason" className="field-input" rows={3} value={reason} aria-invalid={Boolean(reasonError)} aria-describedby={reasonError ? 'withdraw-reason-error' : undefined} onChange={(e) => setReason(e.target.value)} />
           {reasonError && <p id="withdraw-reason-error" className="text-xs text-danger">{reasonError}</p>}
-          <label htmlFor="withdraw-password" className="block text-sm font-medium">Your password, to sign the withdrawal</label>
-          <input id="withdraw-password" type="password" autoComplete="current-password" className="field-input max-w-xs" value={password} aria-invalid={Boolean(passwordError)} aria-describedby={passwordError ? 'withdraw-password-error' : undefined} onChange={(e) => setPassword(e.target.value)} />
-          {passwordError && <p id="withdraw-password-error" className="text-xs text-danger">{passwordError}</p>}
+          {signature.company ? <CompanySignature fresh={signature.fresh} authAt={signature.authAt} error={passwordError} beforeLeaving={keepDraft} what="the withdrawal" /> : <>
+            <label htmlFor="withdraw-password" className="block text-sm font-medium">Your password, to sign the withdrawal</label>
+            <input id="withdraw-password" type="password" autoComplete="current-password" className="field-input max-w-xs" value={password} aria-invalid={Boolean(passwordError)} aria-describedby={passwordError ? 'withdraw-password-error' : undefined} onChange={(e) => setPassword(e.target.value)} />
+            {passwordError && <p id="withdraw-password-error" className="text-xs text-danger">{passwordError}</p>}
+          </>}
           {withdraw.isError && !reasonError && !passwordError && <p role="alert" className="text-xs text-danger">{withdraw.error?.message}</p>}
           <div className="flex gap-2"><button className="btn-danger" disabled={withdraw.isPending}>Withdraw version {detail.version}</button><button type="button" className="btn-quiet" onClick={() => setOpen(false)}>Cancel</button></div>
         </form>

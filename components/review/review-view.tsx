@@ -15,6 +15,7 @@ import type { VersionDetail } from '@/components/correlation/types';
 import type { Comparison, Difference } from '@/lib/engine/compare';
 import { formatNumber } from '@/lib/client/units';
 import { DomainDiff } from './domain-diff';
+import { CompanySignature, useCompanySignature, useDraftAcrossSignIn } from './company-signature';
 import { ChainOutline } from '@/components/calculation/chain-outline';
 import type { TemplateDefinition } from '@/lib/engine/template-types';
 
@@ -138,6 +139,8 @@ function DecisionForm({ slug, version, needsWaiver }: { slug: string; version: n
   const qc = useQueryClient();
   const [password, setPassword] = useState('');
   const [errors, setErrors] = useState<Record<string, string>>({});
+  const signature = useCompanySignature();
+  const keepDraft = useDraftAcrossSignIn(`sign-off:${slug}:${version}`, { comment, waiver }, (d) => { setComment(d.comment); setWaiver(d.waiver); });
   const decide = useMutation({
     mutationFn: (decision: 'approve' | 'return') => api(`/api/correlations/${slug}/versions/${version}/decision`, { body: { decision, comment, ...(decision === 'approve' ? { password, ...(needsWaiver ? { waiver } : {}) } : {}) } }),
     // The cached version still says "in review": drop it so the page shows the state just signed.
@@ -158,9 +161,14 @@ function DecisionForm({ slug, version, needsWaiver }: { slug: string; version: n
           {(p) => <textarea {...p} rows={2} className="field-input" value={waiver} onChange={(e) => setWaiver(e.target.value)} />}
         </Field>
       )}
-      <Field label="Your password, to sign" error={errors.password}>{(p) => <input {...p} type="password" autoComplete="current-password" className="field-input max-w-xs" value={password} onChange={(e) => setPassword(e.target.value)} />}</Field>
+      {signature.company
+        ? <CompanySignature fresh={signature.fresh} authAt={signature.authAt} error={errors.password} beforeLeaving={keepDraft} what="this decision" />
+        : <Field label="Your password, to sign" error={errors.password}>{(p) => <input {...p} type="password" autoComplete="current-password" className="field-input max-w-xs" value={password} onChange={(e) => setPassword(e.target.value)} />}</Field>}
       <div className="flex gap-2">
-        <button type="button" className="btn-primary" disabled={decide.isPending} onClick={() => { if (!password) { setErrors({ password: 'Enter your password to sign' }); return; } decide.mutate('approve'); }}>Approve and sign</button>
+        <button type="button" className="btn-primary" disabled={decide.isPending} onClick={() => {
+          if (signature.company ? !signature.fresh : !password) { setErrors({ password: signature.company ? 'Confirm with your company account to sign' : 'Enter your password to sign' }); return; }
+          decide.mutate('approve');
+        }}>Approve and sign</button>
         <button type="button" className="btn-quiet" disabled={decide.isPending} onClick={() => { if (!comment.trim()) { setErrors({ comment: 'Say what the author should change' }); return; } decide.mutate('return'); }}>Return to the author</button>
       </div>
     </form>

@@ -1,6 +1,8 @@
 import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
+import type { OAuthConfig } from 'next-auth/providers/oauth';
 import { authenticate, endSessions } from './users';
+import { companyProviderConfigured, signInWithCompanyAccount } from './company';
 
 /**
  * The client's address for the sign-in throttle: the last X-Forwarded-For entry (the one added by the
@@ -12,6 +14,26 @@ export function clientAddress(headers: Record<string, unknown>): string {
   return forwarded.at(-1) || get('x-real-ip') || 'unknown';
 }
 import { AppError } from '@/lib/http/errors';
+
+interface CompanyProfile { sub: string; email?: string; email_verified?: boolean; name?: string; groups?: string[] }
+
+/**
+ * The company's OpenID Connect provider (OIDC_ISSUER, OIDC_CLIENT_ID, OIDC_CLIENT_SECRET): the demo and tests run a
+ * local stand-in (scripts/fake-oidc.ts); production points these at the real provider, which must send a `groups`
+ * claim in the ID token. Code flow with PKCE and state.
+ */
+function companyProvider(): OAuthConfig<CompanyProfile>[] {
+  if (!companyProviderConfigured()) return [];
+  const issuer = process.env.OIDC_ISSUER!.replace(/\/$/, '');
+  return [{
+    id: 'company', name: 'your company account', type: 'oauth',
+    wellKnown: `${issuer}/.well-known/openid-configuration`,
+    clientId: process.env.OIDC_CLIENT_ID, clientSecret: process.env.OIDC_CLIENT_SECRET,
+    authorization: { params: { scope: 'openid email profile groups' } },
+    idToken: true, checks: ['pkce', 'state'],
+    profile: (p) => ({ id: p.sub, email: p.email ?? null, name: p.name ?? p.email ?? p.sub }),
+  }];
+}
 
 export const authOptions: NextAuthOptions = {
   session: { strategy: 'jwt', maxAge: 8 * 60 * 60 },
@@ -35,10 +57,27 @@ export const authOptions: NextAuthOptions = {
         }
       },
     }),
+    ...companyProvider(),
   ],
   callbacks: {
-    async jwt({ token, user }) {
+    /** A company sign-in: the person is found or created and given the roles their groups map to now. */
+    async signIn({ user, account, profile }) {
+      if (account?.provider !== 'company') return true;
+      const p = (profile ?? {}) as CompanyProfile;
+      try {
+        const u = await signInWithCompanyAccount({ email: p.email ?? '', emailVerified: p.email_verified !== false, name: p.name ?? '', groups: Array.isArray(p.groups) ? p.groups.map(String) : [] });
+        Object.assign(user, { id: String(u.id), email: u.email, name: u.name, roles: u.roles, sv: u.sessionVersion });
+        return true;
+      } catch (err) {
+        if (err instanceof AppError) return `/sign-in?company=${encodeURIComponent(err.code)}`;
+        console.error('company sign-in failed', err);
+        return '/sign-in?company=unavailable';
+      }
+    },
+    async jwt({ token, user, account }) {
       if (user) {
+        token.via = account?.provider === 'company' ? 'company' : 'password';
+        token.authAt = Math.floor(Date.now() / 1000);
         token.uid = Number(user.id);
         token.roles = (user as { roles?: string[] }).roles ?? [];
         token.sv = (user as { sv?: number }).sv ?? 0;
@@ -46,7 +85,7 @@ export const authOptions: NextAuthOptions = {
       return token;
     },
     async session({ session, token }) {
-      session.user = { ...session.user, id: token.uid as number, roles: (token.roles as string[]) ?? [], sv: token.sv ?? 0 };
+      session.user = { ...session.user, id: token.uid as number, roles: (token.roles as string[]) ?? [], sv: token.sv ?? 0, via: token.via ?? 'password', authAt: token.authAt ?? 0 };
       return session;
     },
   },

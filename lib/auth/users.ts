@@ -6,6 +6,7 @@ import { AppError } from '@/lib/http/errors';
 import { appendAuditEvent } from '@/lib/audit/log';
 import { assertNotThrottled, clearFailures, personBuckets, recordFailure, signInBuckets, throttledCheck } from './throttle';
 import { hashPassword, verifyPassword, PASSWORD_MAX, PASSWORD_MIN } from './passwords';
+import { passwordSignInAllowed } from './company';
 
 
 let dummy: Promise<string> | undefined;
@@ -16,6 +17,8 @@ export interface AuthUser {
   email: string;
   name: string;
   roles: Role[];
+  /** A session caller's sign-in: how and when (Unix seconds). A company account signs by signing in afresh. */
+  session?: { via: 'password' | 'company'; authAt: number };
 }
 
 export function toAuthUser(u: User): AuthUser {
@@ -43,6 +46,9 @@ export async function authenticate({ email, password, client }: { email: string;
   const { User, UserRole } = db();
   const buckets = signInBuckets(email, client);
   await assertNotThrottled(buckets, 'this sign-in');
+  if (!(await passwordSignInAllowed(email))) {
+    throw new AppError('forbidden:password-sign-in-off', 'Password sign-in is switched off here; sign in with your company account.');
+  }
   const user = await User.findOne({ where: { email: email.trim().toLowerCase() }, include: [{ model: UserRole, as: 'roles' }] });
   const ok = user?.isActive ? await verifyPassword(password, user.passwordHash) : (await verifyPassword(password, await dummyHash()), false);
   if (!ok || !user) {
@@ -66,7 +72,7 @@ export async function listUsers() {
   return users.map((u) => ({ ...toAuthUser(u), isActive: u.isActive, lockedUntil: u.lockedUntil, createdAt: u.createdAt }));
 }
 
-async function setRoles(userId: number, roles: Role[], transaction: Transaction) {
+export async function setRoles(userId: number, roles: Role[], transaction: Transaction) {
   const { UserRole } = db();
   await UserRole.destroy({ where: { userId }, transaction });
   await UserRole.bulkCreate([...new Set(roles)].map((role) => ({ userId, role })), { transaction });

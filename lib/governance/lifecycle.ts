@@ -264,7 +264,18 @@ export async function submitVersion({ actor, slug, version }: { actor: AuthUser;
  * A signature (approval, withdrawal) needs the signer's current password. Wrong passwords are throttled like
  * sign-in: a stolen session cannot guess its way to a signature.
  */
+/** How recent a company-account sign-in must be to count as a signature (seconds). */
+export const COMPANY_SIGNATURE_WINDOW_S = 300;
+
+/**
+ * A signature: the signer's current password, or — for a person signed in with their company account, who has no
+ * Correlary password — a sign-in at the company's provider within the last five minutes.
+ */
 async function assertSignature(actor: AuthUser, password: string | undefined) {
+  if (!password && actor.session?.via === 'company') {
+    if (Date.now() / 1000 - actor.session.authAt <= COMPANY_SIGNATURE_WINDOW_S) return;
+    throw new AppError('invalid:password', 'Confirm who you are with your company account (a sign-in within the last 5 minutes) to sign.', { issues: [{ path: 'password', message: 'Confirm with your company account' }] });
+  }
   const me = await findUserById({ id: actor.id });
   if (!password) throw new AppError('invalid:password', 'Enter your current password: the signature needs it.', { issues: [{ path: 'password', message: 'Required to sign' }] });
   if (!me || !(await throttledCheck(personBuckets('sign-off', actor.id), 'sign-off', () => verifyPassword(password, me.passwordHash)))) {

@@ -81,6 +81,8 @@ export const ACCESS = {
   'GET /api/admin/mail': { roles: ['admin'] },
   'GET /api/admin/evidence-policy': { scope: 'read' },
   'PUT /api/admin/evidence-policy': { roles: ['admin'] },
+  'GET /api/admin/sign-in': { roles: ['admin'] },
+  'PUT /api/admin/sign-in': { roles: ['admin'] },
 } as const satisfies Record<string, AccessRule>;
 
 export type RouteKey = keyof typeof ACCESS;

@@ -75,7 +75,7 @@ async function identify(req: NextRequest): Promise<Caller | null> {
   const user = await findUserById({ id: session.user.id });
   // A session issued before a password change, sign-out, deactivation or role change is over.
   if (!user || !user.isActive || user.sessionVersion !== (session.user.sv ?? 0)) return null;
-  return { user: { id: user.id, email: user.email, name: user.name, roles: user.roleNames() }, via: 'session', tokenId: null, scopes: null };
+  return { user: { id: user.id, email: user.email, name: user.name, roles: user.roleNames(), session: { via: session.user.via ?? 'password', authAt: session.user.authAt ?? 0 } }, via: 'session', tokenId: null, scopes: null };
 }
 
 export function authorize(caller: Caller | null, access: AccessRule): asserts caller is Caller {

@@ -6,7 +6,7 @@ export async function signInAs(page: Page, who: string) {
   await page.goto('/sign-in');
   await page.getByLabel('E-mail').fill(`${who}@demo.example`);
   await page.getByLabel('Password').fill(DEMO_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
   await expect(page).toHaveURL(/\/library/);
 }
 

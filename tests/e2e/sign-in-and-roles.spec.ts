@@ -23,12 +23,12 @@ for (const c of CASES) {
 
 test('sign-in explains bad input next to the field and keeps what was typed', async ({ page }) => {
   await page.goto('/sign-in');
-  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
   await expect(page.getByText('Enter your e-mail address')).toBeVisible();
   await expect(page.getByText('Enter your password')).toBeVisible();
   await page.getByLabel('E-mail').fill('engineer@demo.example');
   await page.getByLabel('Password').fill('definitely-wrong');
-  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.getByRole('button', { name: 'Sign in', exact: true }).click();
   await expect(page.getByRole('form', { name: 'Sign in' }).getByRole('alert')).toHaveText('E-mail or password is not correct.');
   await expect(page.getByLabel('E-mail')).toHaveValue('engineer@demo.example');
   await page.screenshot({ path: 'test-results/sign-in-error.png' });

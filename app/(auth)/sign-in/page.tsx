@@ -1,6 +1,9 @@
 import type { Metadata } from 'next';
 import { Logo } from '@/components/ui/logo';
 import { SignInForm } from './sign-in-form';
+import { companyProviderConfigured } from '@/lib/auth/company';
+
+export const dynamic = 'force-dynamic';
 
 export const metadata: Metadata = { title: 'Sign in' };
 
@@ -12,7 +15,7 @@ export default function SignInPage() {
           <Logo size={40} />
           <p className="text-center text-sm text-ink-soft">The governed library of heat-transfer and flow correlations</p>
         </div>
-        <SignInForm />
+        <SignInForm company={companyProviderConfigured()} />
       </div>
     </main>
   );

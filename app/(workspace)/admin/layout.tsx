@@ -8,6 +8,7 @@ const TABS = [
   { href: '/admin/mail', label: 'Sent mail' },
   { href: '/admin/evidence', label: 'Evidence policy' },
   { href: '/admin/webhooks', label: 'Webhook allow-list' },
+  { href: '/admin/sign-in', label: 'Company sign-in' },
 ];
 
 export default async function AdminLayout({ children }: { children: React.ReactNode }) {
