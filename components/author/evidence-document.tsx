@@ -49,7 +49,7 @@ export function EvidenceDocument({ label, value, onChange }: { label: string; va
           <button type="button" className="btn-quiet px-2 py-0.5 text-xs" aria-label={`Remove the source document of ${label}`} onClick={() => onChange(undefined)}>Remove</button>
         </>
       ) : <span className="text-ink-faint">none</span>}
-      <label className="btn-quiet cursor-pointer px-2 py-0.5 text-xs">
+      <label className="btn-quiet cursor-pointer px-2 py-0.5 text-xs focus-within:outline focus-within:outline-2 focus-within:outline-brand">
         {state.busy ? 'Uploading…' : value ? 'Replace…' : 'Attach PDF or image…'}
         <input ref={input} type="file" className="sr-only" accept="application/pdf,image/png,image/jpeg" aria-label={`Source document of ${label}`} disabled={state.busy}
           onChange={(e) => { const f = e.target.files?.[0]; if (f) void attach(f); }} />

@@ -83,6 +83,8 @@ export function SeriesChart({ series, points, limits = [], bands = [], xLabel, y
   const canLogX = (xDomain ? xDomain[0] : Math.min(...series.flatMap((s) => s.points.map((p) => p.x)))) > 0;
   const xIsLog = xLog && canLogX;
   const xs = xDomain ?? [Math.min(...series.flatMap((s) => s.points.map((p) => p.x))), Math.max(...series.flatMap((s) => s.points.map((p) => p.x)))];
+  // A limit's label sits on the side of its line that faces the plot's middle, never over the axis labels.
+  const leftHalf = (x: number) => (xIsLog && xs[0] > 0 ? Math.log(x / xs[0]) < Math.log(xs[1] / xs[0]) / 2 : x - xs[0] < (xs[1] - xs[0]) / 2);
   const xTicks = xIsLog ? decades(xs[0], xs[1]) : undefined;
   const yTicks = yLog ? decades(yMin, yMax) : undefined;
   // Room for the legend: about three entries per line.
@@ -110,7 +112,7 @@ export function SeriesChart({ series, points, limits = [], bands = [], xLabel, y
             <Tooltip formatter={(v) => formatNumber(Number(v), 5)} labelFormatter={(v) => `${xLabel} = ${formatNumber(Number(v), 5)}`} />
             <Legend verticalAlign="top" height={legendHeight} wrapperStyle={{ fontSize: 12, lineHeight: '18px' }} />
             {bands.map((b, k) => <ReferenceArea key={`band-${k}`} x1={b.from} x2={b.to} fill={COLORS[(b.color ?? k) % COLORS.length]} fillOpacity={0.08} label={{ value: b.label, position: 'insideTop', fontSize: 10, fill: '#4a5866' }} />)}
-            {limits.filter((l) => inDomain(l.x)).map((l, k) => <ReferenceLine key={`lim-${k}`} x={l.x} stroke="#9a5b00" strokeDasharray="5 3" label={{ value: l.label, position: k % 2 ? 'insideBottomRight' : 'insideTopRight', fontSize: 11, fill: '#9a5b00' }} />)}
+            {limits.filter((l) => inDomain(l.x)).map((l, k) => <ReferenceLine key={`lim-${k}`} x={l.x} stroke="#9a5b00" strokeDasharray="5 3" label={{ value: l.label, position: `${k % 2 ? 'insideBottom' : 'insideTop'}${leftHalf(l.x) ? 'Left' : 'Right'}` as 'insideTopLeft', fontSize: 11, fill: '#9a5b00' }} />)}
             {series.map((s, k) => <Line key={s.label} data={s.points.filter((p) => inDomain(p.x))} dataKey="y" name={s.label} stroke={COLORS[(s.color ?? k) % COLORS.length]} strokeDasharray={s.dashed ? '6 4' : undefined} strokeOpacity={s.dashed ? 0.75 : 1} legendType={s.hideInLegend ? 'none' : 'line'} dot={false} strokeWidth={s.dashed ? 1.5 : 2} isAnimationActive={false} connectNulls={false} />)}
             {shownPoints.length > 0 && <Scatter data={shownPoints} dataKey="y" name="check cases" fill="#b0562f" shape="diamond" isAnimationActive={false} />}
           </ComposedChart>
