@@ -73,6 +73,8 @@ export function rolesOfGroups(groups: string[], mapping: CompanySettings['groupR
 export async function signInWithCompanyAccount({ email, emailVerified, name, groups }: { email: string; emailVerified: boolean; name: string; groups: string[] }): Promise<AuthUser & { sessionVersion: number }> {
   const address = email.trim().toLowerCase();
   if (!address || !emailVerified) throw new AppError('forbidden:company-email', 'Your company account has no verified e-mail address; Correlary cannot tell who you are.');
+  // A provider's answer is bounded like any input: at most 500 groups of at most 190 characters are looked at.
+  groups = groups.filter((g) => typeof g === 'string' && g.length > 0 && g.length <= 190).slice(0, 500);
   const roles = rolesOfGroups(groups, (await companySettings()).groupRoles);
   if (!roles.length) throw new AppError('forbidden:no-role', 'Your company account is in no group that Correlary gives a role to; ask a Correlary admin.');
   const { sequelize, User, UserRole } = db();

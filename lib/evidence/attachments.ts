@@ -42,6 +42,7 @@ export async function uploadAttachment({ actor, name, content }: { actor: AuthUs
   if (bytes.byteLength > MAX_ATTACHMENT_BYTES) {
     throw new AppError('too_large:attachment', `"${shown}" is ${(bytes.byteLength / 1048576).toFixed(1)} MB; a document may be at most ${MAX_ATTACHMENT_BYTES / 1048576} MB (attach the page or excerpt that holds the value).`, { issues: [{ path: 'content', message: `larger than ${MAX_ATTACHMENT_BYTES} bytes` }] });
   }
+  await assertUploadAllowance(actor, bytes.byteLength);
   const detected = await fileTypeFromBuffer(bytes);
   if (!detected || !(ATTACHMENT_TYPES as readonly string[]).includes(detected.mime)) {
     throw new AppError('invalid:attachment-type', `"${shown}" is ${detected ? `a ${detected.mime} file` : 'not a file type Correlary recognises'} by its content; attach a PDF, PNG or JPEG.`, { issues: [{ path: 'content', message: `detected type ${detected?.mime ?? 'unknown'}; allowed ${ATTACHMENT_TYPES.join(', ')}` }] });
@@ -57,6 +58,21 @@ export async function uploadAttachment({ actor, name, content }: { actor: AuthUs
     return a;
   });
   return { id: row.id, sha256: row.sha256, mediaType: row.mediaType, name: row.name, size: row.size };
+}
+
+/**
+ * Bounds what one person may put into the store in 24 hours (ATTACHMENTS_PER_DAY documents, default 200, and
+ * ATTACHMENT_BYTES_PER_DAY, default 200 MB): evidence is a page or an excerpt, and a runaway script must not fill the store.
+ */
+async function assertUploadAllowance(actor: AuthUser, size: number) {
+  const perDay = Number(process.env.ATTACHMENTS_PER_DAY ?? 200);
+  const bytesPerDay = Number(process.env.ATTACHMENT_BYTES_PER_DAY ?? 200 * 1024 * 1024);
+  const [used] = await db().sequelize.query<{ n: number; bytes: number | null }>(
+    'SELECT COUNT(*) AS n, SUM(size) AS bytes FROM attachments WHERE uploaded_by = ? AND created_at > ?',
+    { replacements: [actor.id, new Date(Date.now() - 24 * 3600 * 1000)], type: QueryTypes.SELECT });
+  if (Number(used.n) + 1 > perDay || Number(used.bytes ?? 0) + size > bytesPerDay) {
+    throw new AppError('rate_limited:attachments', `You have uploaded ${Number(used.n)} documents (${(Number(used.bytes ?? 0) / 1048576).toFixed(1)} MB) in the last 24 hours; the limit is ${perDay} documents and ${(bytesPerDay / 1048576).toFixed(0)} MB. Try again later or ask an admin.`, undefined, { 'Retry-After': '3600' });
+  }
 }
 
 /**

@@ -11,6 +11,7 @@ import { contentHash } from '@/lib/engine/canonical';
 import { simplePdf } from '@/lib/evidence/demo-document';
 import { storageSettings } from '@/lib/storage/objects';
 import { verifyAllContent } from '@/lib/governance/content-check';
+import { uploadAttachment } from '@/lib/evidence/attachments';
 
 const b64 = (bytes: Uint8Array) => Buffer.from(bytes).toString('base64');
 const sha = (bytes: Uint8Array) => createHash('sha256').update(bytes).digest('hex');
@@ -69,6 +70,19 @@ describe('evidence documents in object storage', () => {
     expect(garbage.body.error.details.issues[0].path).toBe('content');
     expect((await call('/api/attachments', { cookie: engineer, body: { name: 'x.pdf', content: b64(pdf) } })).status).toBe(403);
     expect(await countAttachments()).toBe(before);
+  });
+
+  it('bounds what one person may upload in a day, with the reason and when to retry', async () => {
+    const previous = process.env.ATTACHMENTS_PER_DAY;
+    process.env.ATTACHMENTS_PER_DAY = '2';
+    try {
+      const someone = await freshUser(['author'], 'quota');
+      await uploadAttachment({ actor: someone.user, name: 'a.pdf', content: b64(simplePdf(['one'])) });
+      await uploadAttachment({ actor: someone.user, name: 'b.pdf', content: b64(simplePdf(['two'])) });
+      await expect(uploadAttachment({ actor: someone.user, name: 'c.pdf', content: b64(simplePdf(['three'])) })).rejects.toMatchObject({ code: 'rate_limited:attachments', headers: { 'Retry-After': '3600' } });
+    } finally {
+      if (previous === undefined) delete process.env.ATTACHMENTS_PER_DAY; else process.env.ATTACHMENTS_PER_DAY = previous;
+    }
   });
 
   it('serves a document only to its uploader until a published version names it', async () => {
