@@ -1,6 +1,7 @@
 import { QueryTypes } from 'sequelize';
 import { db } from '@/models';
 import { setCompanySettings } from '@/lib/auth/company';
+import { readSetting } from '@/lib/db/settings';
 
 export const name = '20261205000300-demo-company-groups';
 
@@ -9,8 +10,7 @@ export const name = '20261205000300-demo-company-groups';
  * sign-in works at once. An admin edits the mapping on Administration → Company sign-in. Passwords stay on for the demo.
  */
 export async function up(): Promise<void> {
-  const [row] = await db().sequelize.query<{ n: number }>("SELECT COUNT(*) AS n FROM settings WHERE `key` = 'company-sign-in'", { type: QueryTypes.SELECT });
-  if (Number(row.n) > 0) return;
+  if (await readSetting('company-sign-in')) return;
   await setCompanySettings({ actor: null, settings: { passwordSignIn: true, groupRoles: [
     { group: 'thermal-methods', role: 'author' },
     { group: 'thermal-approvers', role: 'approver' },

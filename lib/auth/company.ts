@@ -1,10 +1,10 @@
 import { randomBytes } from 'node:crypto';
-import { QueryTypes } from 'sequelize';
 import { z } from 'zod';
 import { db, ROLES, type Role } from '@/models';
 import { AppError } from '@/lib/http/errors';
 import { appendAuditEvent } from '@/lib/audit/log';
 import { forgetCachedTokensOfUser } from '@/lib/api/tokens';
+import { readSetting, saveSetting } from '@/lib/db/settings';
 import { hashPassword } from './passwords';
 import { setRoles, type AuthUser } from './users';
 
@@ -35,8 +35,8 @@ export function breakGlassEmail(): string {
 }
 
 export async function companySettings(): Promise<CompanySettings> {
-  const [row] = await db().sequelize.query<{ value: string }>('SELECT value FROM settings WHERE `key` = ?', { replacements: [KEY], type: QueryTypes.SELECT });
-  return row ? { ...DEFAULTS, ...(JSON.parse(row.value) as Partial<CompanySettings>) } : DEFAULTS;
+  const saved = await readSetting<Partial<CompanySettings>>(KEY);
+  return saved ? { ...DEFAULTS, ...saved } : DEFAULTS;
 }
 
 export async function passwordSignInAllowed(email: string): Promise<boolean> {
@@ -51,12 +51,7 @@ export async function setCompanySettings({ actor, settings }: { actor: AuthUser 
     groupRoles: [...new Map(settings.groupRoles.map((m) => [`${m.group}|${m.role}`, { group: m.group.trim(), role: m.role }])).values()],
   };
   const before = await companySettings();
-  const { sequelize } = db();
-  await sequelize.transaction(async (transaction) => {
-    await sequelize.query('INSERT INTO settings (`key`, value, updated_at) VALUES (?, ?, ?) ON DUPLICATE KEY UPDATE value = VALUES(value), updated_at = VALUES(updated_at)',
-      { replacements: [KEY, JSON.stringify(clean), new Date()], type: QueryTypes.INSERT, transaction });
-    await appendAuditEvent({ transaction, event: { actorId: actor?.id ?? null, action: 'settings.sign-in-changed', entityType: 'setting', entityId: KEY, details: { before, after: clean } } });
-  });
+  await saveSetting({ key: KEY, value: clean, before, actorId: actor?.id ?? null, action: 'settings.sign-in-changed' });
   return clean;
 }
 

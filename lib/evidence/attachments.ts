@@ -85,13 +85,16 @@ export async function assertAttachmentRefs(actor: AuthUser, checkCases: unknown[
   const { Attachment } = db();
   const rows = await Attachment.findAll({ where: { id: [...new Set(refs.map((r) => r.ref!.id))] }, transaction });
   const byId = new Map(rows.map((r) => [r.id, r]));
+  // Someone else's uploads may be named only once a published version names them: looked up once per document.
+  const published = new Set<string>();
+  for (const r of rows) if (r.uploadedBy !== actor.id && (await isReferencedByPublished(r.id, transaction))) published.add(r.id);
   const issues: { path: string; message: string }[] = [];
   for (const { i, ref } of refs) {
     const row = byId.get(ref!.id);
     const path = `checkCases[${i}].source.attachment`;
     if (!row) issues.push({ path, message: `no uploaded document ${ref!.id}` });
     else if (row.sha256 !== ref!.sha256 || row.mediaType !== ref!.mediaType) issues.push({ path, message: 'does not match the uploaded document (hash or type)' });
-    else if (row.uploadedBy !== actor.id && !(await isReferencedByPublished(row.id, transaction))) issues.push({ path, message: 'another person’s document that no published version uses yet' });
+    else if (row.uploadedBy !== actor.id && !published.has(row.id)) issues.push({ path, message: 'another person’s document that no published version uses yet' });
   }
   if (issues.length) throw new AppError('invalid:check-cases', `A check case names an evidence document that cannot be used: ${issues.map((x) => `${x.path}: ${x.message}`).join('; ')}`, { issues });
 }

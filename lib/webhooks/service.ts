@@ -1,3 +1,4 @@
+import { readSetting, saveSetting } from '@/lib/db/settings';
 import { randomBytes } from 'node:crypto';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { db } from '@/models';
@@ -24,8 +25,7 @@ export interface EndpointView {
 
 /** URL prefixes an admin allows deliveries to (scheme, host, port and path prefix). Empty: no webhooks at all. */
 export async function webhookAllowlist(): Promise<string[]> {
-  const [row] = await db().sequelize.query<{ value: string }>('SELECT value FROM settings WHERE `key` = ?', { replacements: [ALLOWLIST_KEY], type: QueryTypes.SELECT });
-  return row ? (JSON.parse(row.value) as string[]) : [];
+  return (await readSetting<string[]>(ALLOWLIST_KEY)) ?? [];
 }
 
 export function normalizeUrl(raw: string, path = 'url'): string {
@@ -45,12 +45,7 @@ export async function setWebhookAllowlist({ actor, prefixes }: { actor: AuthUser
   if (!actor.roles.includes('admin')) throw new AppError('forbidden:role', 'Only an admin changes the webhook allow-list.');
   const normalized = prefixes.map((p, i) => normalizeUrl(p, `prefixes.${i}`));
   const before = await webhookAllowlist();
-  const { sequelize } = db();
-  await sequelize.transaction(async (transaction) => {
-    await sequelize.query('INSERT INTO settings (`key`, value, updated_at) VALUES (?, ?, ?) ON DUPLICATE KEY UPDATE value = VALUES(value), updated_at = VALUES(updated_at)',
-      { replacements: [ALLOWLIST_KEY, JSON.stringify(normalized), new Date()], type: QueryTypes.INSERT, transaction });
-    await appendAuditEvent({ transaction, event: { actorId: actor.id, action: 'webhooks.allowlist-changed', entityType: 'setting', entityId: ALLOWLIST_KEY, details: { before, after: normalized } } });
-  });
+  await saveSetting({ key: ALLOWLIST_KEY, value: normalized, before, actorId: actor.id, action: 'webhooks.allowlist-changed' });
   return { prefixes: normalized };
 }
 

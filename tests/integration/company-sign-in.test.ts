@@ -67,7 +67,11 @@ describe('company sign-in', () => {
     // A password session without a password is refused as before.
     await expect(decideVersion({ actor: { ...approver, session: { via: 'password', authAt: now } }, slug, version: 1, decision: 'approve', comment: 'ok', waiver: FIXTURE_WAIVER })).rejects.toMatchObject({ code: 'invalid:password' });
     const fresh = { ...approver, session: { via: 'company' as const, authAt: now - 10 } };
-    await expect(decideVersion({ actor: fresh, slug, version: 1, decision: 'approve', comment: 'ok', waiver: FIXTURE_WAIVER })).resolves.toBeTruthy();
+    await decideVersion({ actor: fresh, slug, version: 1, decision: 'approve', comment: 'ok', waiver: FIXTURE_WAIVER });
+    const [signed] = await db().sequelize.query<{ status: string; user_id: number; decision: string }>(
+      `SELECT v.status, s.user_id, s.decision FROM correlation_versions v JOIN correlations c ON c.id = v.correlation_id
+       JOIN sign_offs s ON s.version_id = v.id WHERE c.slug = ? AND v.version = 1`, { replacements: [slug], type: QueryTypes.SELECT });
+    expect(signed).toEqual({ status: 'approved', user_id: approver.id, decision: 'approved' });
   });
 
   it('lets only an admin, in person, read and change the mapping; bad rows are named', async () => {
