@@ -8,6 +8,7 @@ import * as libraryAdditions from './20261203000100-standard-library-additions';
 import * as libraryCorrections from './20261205000100-library-corrections';
 import * as demoEvidence from './20261205000200-demo-evidence-document';
 import * as demoCompanyGroups from './20261205000300-demo-company-groups';
+import * as libraryGrowth from './20261206000100-standard-library-film-boiling-jets-expansion';
 
 export interface Seeder {
   name: string;
@@ -16,4 +17,4 @@ export interface Seeder {
 }
 
 /** Seeders in order; tracked in their own table, so each runs once per database. */
-export const seeders: Seeder[] = [demoUsers, standardLibrary, demoScenario, propertyTables, templates, demoCalculations, libraryAdditions, libraryCorrections, demoEvidence, demoCompanyGroups];
+export const seeders: Seeder[] = [demoUsers, standardLibrary, demoScenario, propertyTables, templates, demoCalculations, libraryAdditions, libraryCorrections, demoEvidence, demoCompanyGroups, libraryGrowth];

@@ -111,6 +111,24 @@ const OSEEN = 'Low Péclet number limit of a cylinder in cross-flow (Oseen flow)
 const OSEEN_WHY = 'the correlation’s stated 20 % with 15 % for the next term of the expansion at Pe ≈ 0.3';
 /** Saturated water at T from IAPWS-95 (python3-iapws): liquid properties and latent heat for condensation points. */
 const WATER_SAT = (T: number) => ({ rho_l: `IAPWS95(T=${T}, x=0).rho`, rho_v: `IAPWS95(T=${T}, x=1).rho`, mu_l: `IAPWS95(T=${T}, x=0).mu`, k_l: `IAPWS95(T=${T}, x=0).k`, cp_l: `IAPWS95(T=${T}, x=0).cp * 1000`, h_fg: `(IAPWS95(T=${T}, x=1).h - IAPWS95(T=${T}, x=0).h) * 1000`, T_sat: T });
+/** Saturated water at T_sat with its vapour at the film temperature (T_s + T_sat)/2, from IAPWS-95 (python3-iapws): a film-boiling point. */
+const STEAM_FILM = (Tsat: number, Ts: number, D: number, eps?: number) => {
+  const Tf = (Tsat + Ts) / 2;
+  const vap = `IAPWS95(T=${Tf}, P=IAPWS95(T=${Tsat}, x=0).P)`;
+  return {
+    rho_l: `IAPWS95(T=${Tsat}, x=0).rho`, rho_v: `${vap}.rho`, mu_v: `${vap}.mu`, k_v: `${vap}.k`, cp_v: `${vap}.cp * 1000`,
+    h_fg: `(IAPWS95(T=${Tsat}, x=1).h - IAPWS95(T=${Tsat}, x=0).h) * 1000`, sigma: `IAPWS95(T=${Tsat}, x=0).sigma`, T_sat: Tsat, T_s: Ts, D,
+    ...(eps === undefined ? {} : { eps }),
+  };
+};
+const VF_BOIL = 'The laminar vapour film around a horizontal cylinder, Nusselt’s film equation turned upside down and integrated by RK4, between a shear-free and a still liquid interface (coefficients 0.728 and 0.515); the value is their geometric mean — validation/reference/films.ts';
+const VF_BOIL_WHY = 'the interface condition puts the film model within 4^(−⅛) = ±19 % of the mean (both bounds are solutions of the same laminar model; neither is data), combined with the correlation’s stated accuracy';
+/** Goldstein, Behbahani & Heppelmann (1986): mean Nusselt number of an air jet over a disc of radius r (recalled). */
+const goldstein1986 = (i: Record<string, number>) => ((24 - Math.abs(i.H_over_D - 7.75)) * i.Re_D ** 0.76) / (533 + 44 * i.r_over_D ** 1.285);
+const GOLDSTEIN = 'Goldstein, Behbahani & Heppelmann (1986) Int. J. Heat Mass Transfer 29(8):1227–1235, air jets: Nu = (24 − |H/D − 7.75|) Re^0.76/(533 + 44 (r/D)^1.285) for 61,000 ≤ Re ≤ 124,000, 6 ≤ H/D ≤ 12 (from memory); tolerance √(15 %² + 15 %²) for Martin’s stated accuracy and the recalled fit’s scatter';
+/** Huber & Viskanta (1994): mean Nusselt number under a square 3 × 3 array of round jets of pitch S (recalled). */
+const huberViskanta1994 = (i: Record<string, number>) => 0.285 * i.Re_D ** 0.71 * i.Pr ** 0.33 * i.H_over_D ** -0.123 * Math.sqrt(Math.PI / (4 * i.f)) ** -0.725;
+const HUBER = 'Huber & Viskanta (1994) Int. J. Heat Mass Transfer 37(18):2859–2869, square arrays of air jets: Nu = 0.285 Re^0.71 Pr^0.33 (H/D)^(−0.123) (S/D)^(−0.725) for 3,400 ≤ Re ≤ 20,500, 0.25 ≤ H/D ≤ 6, 4 ≤ S/D ≤ 8, with S/D = (π/(4f))^½ (from memory); tolerance √(15 %² + 15 %²) for Martin’s stated accuracy and the recalled fit’s scatter';
 const AIR = 'Air(T={T}, P={P})';
 const AIR_CITE = 'Lemmon et al. (2000) equation of state, Lemmon & Jacobsen (2004) transport, computed by python3-iapws';
 
@@ -430,6 +448,31 @@ export const PLAN: Planned[] = [
   mem('cylinder-crossflow-hilpert', { Nu_D: 1 }, 0.23, [{ Re_D: 10, Pr: 0.71 }], 'Collis & Williams (1959) J. Fluid Mech. 6:357, hot wires in air: Nu = 0.24 + 0.56 Re^0.45 for 0.02 < Re < 44 at small overheat (from memory); tolerance √(20 %² + 10 %²)', (i) => 0.24 + 0.56 * i.Re_D ** 0.45),
   mem('sphere-forced-whitaker', { Nu_D: 1 }, 0.32, [{ Re_D: 100, Pr: 7, mu_ratio: 1 }, { Re_D: 1000, Pr: 7, mu_ratio: 1 }], 'Vliet & Leppert (1961) J. Heat Transfer 83:163, spheres in water: Nu Pr^(−0.3) (μ_s/μ)^(1/4) = 1.2 + 0.53 Re^0.54 for 1 < Re < 2×10⁵ (from memory); tolerance √(30 %² + 10 %²)', (i) => i.Pr ** 0.3 * (1.2 + 0.53 * i.Re_D ** 0.54)),
   mem('enclosure-vertical-macgregor-emery', { Nu_L: 1 }, 0.23, [{ Ra_L: 1e6, Pr: 1, H_over_L: 20 }, { Ra_L: 3e6, Pr: 1, H_over_L: 20 }], 'ElSherbiny, Raithby & Hollands (1982) J. Heat Transfer 104:96, tall air cavities: Nu = max[0.0605 Ra^(1/3), (1 + (0.104 Ra^0.293/(1 + (6310/Ra)^1.36))³)^(1/3), 0.242 (Ra/A)^0.272] (from memory); tolerance √(20 %² + 10 %²); at A = 10–30 and Ra ≤ 10⁵ the two part by up to 25 %', (i) => Math.max(0.0605 * Math.cbrt(i.Ra_L), Math.cbrt(1 + ((0.104 * i.Ra_L ** 0.293) / (1 + (6310 / i.Ra_L) ** 1.36)) ** 3), 0.242 * (i.Ra_L / i.H_over_L) ** 0.272)),
+
+  // ——— film boiling on horizontal cylinders: two correlations fitted to different data, the laminar vapour-film model ———
+  ind('boiling-film-horizontal-cylinder-bromley', 'vapour-film-cylinder', 0.19, [STEAM_FILM(373.124, 573.15, 0.01, 0), STEAM_FILM(373.124, 873.15, 0.004, 0.8), STEAM_FILM(423.15, 673.15, 0.015, 0.5)], VF_BOIL, VF_BOIL_WHY),
+  xc('boiling-film-horizontal-cylinder-bromley', 'boiling-film-horizontal-cylinder-breen-westwater', [STEAM_FILM(373.124, 673.15, 0.008, 0), STEAM_FILM(453.03, 773.15, 0.003, 0)]),
+  ind('boiling-film-horizontal-cylinder-breen-westwater', 'vapour-film-cylinder', 0.19, [STEAM_FILM(373.124, 673.15, 0.006), STEAM_FILM(423.15, 823.15, 0.0025)], VF_BOIL, VF_BOIL_WHY),
+  xc('boiling-film-horizontal-cylinder-breen-westwater', 'boiling-film-horizontal-cylinder-bromley', [STEAM_FILM(373.124, 493.15, 0.01), STEAM_FILM(453.03, 673.15, 0.005)], { eps: 0 }),
+
+  // ——— impinging round jets: Martin's two forms against correlations of other laboratories (recalled), and against each other ———
+  // Over the whole overlap (61,000 ≤ Re ≤ 124,000, 6 ≤ H/D ≤ 12, 2.5 ≤ r/D ≤ 7.5) Martin and Goldstein et al. agree within
+  // −10 % to +19 %; the points below take the worst corner, the middle and the far corner.
+  mem('impinging-jet-round-single-martin', { Nu_D: 1 }, 0.213, [{ Re_D: 61000, Pr: 0.71, H_over_D: 6, r_over_D: 2.5 }, { Re_D: 90000, Pr: 0.71, H_over_D: 9, r_over_D: 5 }, { Re_D: 124000, Pr: 0.71, H_over_D: 12, r_over_D: 7.5 }], GOLDSTEIN, goldstein1986),
+  xv('impinging-jet-round-single-martin', 'impinging-jet-round-array-martin', 'jet-array-cell', [{ Re_D: 10000, Pr: 0.71, H_over_D: 2, r_over_D: 5 }]),
+  // Huber & Viskanta's confined 3 × 3 arrays and Martin's open arrays agree within ±11 % for S/D ≥ 6; for the densest arrays
+  // (S/D = 4.5, f = 0.039) far from the plate (H/D = 6) Martin's form lies 19–25 % below theirs.
+  mem('impinging-jet-round-array-martin', { Nu_D: 1 }, 0.213, [{ Re_D: 3400, Pr: 0.71, H_over_D: 2, f: Math.PI / 256 }, { Re_D: 10000, Pr: 0.71, H_over_D: 4, f: Math.PI / 144 }, { Re_D: 20500, Pr: 0.71, H_over_D: 6, f: Math.PI / 144 }], HUBER, huberViskanta1994),
+  xv('impinging-jet-round-array-martin', 'impinging-jet-round-single-martin', 'jet-single-cell', [{ Re_D: 50000, Pr: 0.71, H_over_D: 2, f: 0.01 }]),
+
+  // ——— sudden expansion: the momentum balance, Hooper's fit to data, the exit loss into a vessel ———
+  // Hooper's turbulent form adds 0.8 f_D to the same momentum balance: the cross-checks guard the transcription and the
+  // area-ratio convention; the exit losses tie the β → 0 end to measurement (turbulent) and to the exact Poiseuille profile (laminar).
+  xc('minor-loss-sudden-expansion-borda-carnot', 'minor-loss-sudden-expansion-hooper', [{ beta: 0.2 }, { beta: 0.5 }, { beta: 0.8 }], { Re_1: 1e5, f_D: 0.018 }),
+  cp('minor-loss-sudden-expansion-borda-carnot', 'exit-loss-turbulent', 0.1, [{ beta: 0 }], 'A pipe discharging into a large vessel (β = 0) loses one velocity head in turbulent flow (common practice; measured 1.0–1.1)', 'the non-uniform turbulent profile carries up to 10 % more kinetic energy than its mean velocity'),
+  xc('minor-loss-sudden-expansion-hooper', 'minor-loss-sudden-expansion-borda-carnot', [{ beta: 0.3, Re_1: 2e4, f_D: 0.026 }, { beta: 0.6, Re_1: 1e6, f_D: 0.0117 }]),
+  cp('minor-loss-sudden-expansion-hooper', 'exit-loss-turbulent', 0.1, [{ beta: 0, Re_1: 1e5, f_D: 0.018 }], 'A pipe discharging into a large vessel (β = 0) loses one velocity head in turbulent flow (common practice; measured 1.0–1.1)', 'the non-uniform turbulent profile carries up to 10 % more kinetic energy than its mean velocity'),
+  lim('minor-loss-sudden-expansion-hooper', 'exit-loss-laminar', 0.01, [{ beta: 0, Re_1: 500, f_D: 0.02 }], 'A developed laminar flow discharging into a large vessel loses its whole kinetic energy, α = 2 velocity heads for the Poiseuille profile (exact)', 'exact for a developed profile; 1 % for the profile’s development in a real pipe'),
 ];
 
 /** The partner's inputs: the case's values for the symbols it shares, then the fixed ones the locator names. */

@@ -11,7 +11,7 @@ import { annular, pin, solveFin, straightRectangular, straightTriangular, type F
 import { annulusFd, parallelPlatesFd, rectangularDuctFd, rectangularDuctFrictionSeries } from './ducts';
 import { apparentFrictionFanning, thermalEntrance } from './entrance';
 import { alignedRectanglesViewFactor, blackbodyFraction, coaxialDisksViewFactor, parallelPlatesExchangeSeries, parallelStripsViewFactor, perpendicularRectanglesViewFactor, sphereToDiskViewFactor } from './radiation';
-import { nusseltTubeColumn, sparrowGreggPlate } from './films';
+import { nusseltTubeColumn, sparrowGreggPlate, vapourFilmCylinder } from './films';
 import { nShellsEffectiveness } from './exchangers';
 import { counterflowEffectiveness, counterflowMeanTemperatureDifference, crossflowEffectiveness, crossflowUnmixedSeries, oneShellTwoTubeCorrectionFactor, oneShellTwoTubePassEffectiveness, parallelFlowEffectiveness, singleStreamEffectiveness } from './exchangers';
 import { blasius, graetzMeanNusselt, graetzNusseltUWT, levequeUniformFluxCoefficient, ostrachG, simpsonSamples, pohlhausenNusseltCoefficient, powerLawWallNusseltCoefficient, thermalThicknessEta } from './similarity';
@@ -374,6 +374,15 @@ Object.assign(REFERENCES, {
     const f = filmFluid(i);
     return { h: nusseltTubeColumn({ ...f, D: i.D, N: Math.round(i.N), hfg: f.h_fg * (1 + (0.68 * f.cp_l * f.dT) / f.h_fg) }).mean };
   },
+  // Film boiling on a horizontal cylinder: the laminar vapour film solved numerically between its two interface bounds
+  // (films.ts); the value is their geometric mean, 4^(−⅛) = 16 % from either. The latent heat is corrected for the
+  // vapour's superheat as Sadasivan & Lienhard (1987) give it, the same in both bounds.
+  'vapour-film-cylinder': (i: Inputs) => {
+    const dT = i.T_s - i.T_sat;
+    const hfg = i.h_fg * (1 + (0.968 - (0.163 * i.k_v) / (i.mu_v * i.cp_v)) * ((i.cp_v * dT) / i.h_fg));
+    const b = vapourFilmCylinder({ rho_l: i.rho_l, rho_v: i.rho_v, mu_v: i.mu_v, k_v: i.k_v, hfg, dT, D: i.D });
+    return { h_conv: Math.sqrt(b.freeSurface * b.stillLiquid) };
+  },
   // Below the onset of cells the layer only conducts: Nu = 1.
   'conduction-layer': () => ({ Nu_L: 1 }),
 });
@@ -398,6 +407,11 @@ Object.assign(REFERENCES, {
     const eu = (2 * (4 * Math.PI / (-0.5 * Math.log(phi) - 0.5 * (1 - phi * phi) / (1 + phi * phi))) * (a - 1)) / (a * a * Re_Dmax);
     return { Eu: eu, Eu_total: eu * N_L };
   },
+  // A pipe discharging into a large vessel loses its whole kinetic energy: in turbulent flow about one velocity head
+  // (measured exit losses 1.0–1.1, common practice); a developed laminar (Poiseuille) profile carries α = 2 velocity
+  // heads of kinetic energy, ∫ (u/V)³ dA/A = 2 exactly, and loses them all.
+  'exit-loss-turbulent': () => ({ K: 1 }),
+  'exit-loss-laminar': () => ({ K: 2 }),
   // A sharp-edged pipe entrance from a large vessel loses about half a velocity head (common practice).
   'sharp-entrance': () => ({ K: 0.5 }),
   // In creeping flow a fitting's loss is viscous: K → K₁/Re.

@@ -67,4 +67,25 @@ export const MAPPINGS: Record<string, Relation> = {
     rel: 0.1,
     relUncertainty: 'a layer under a cold plate and a plate in open surroundings differ in the plumes that leave them; 10 % is a judgement, not a published figure',
   },
+  /**
+   * Martin (1977) built his array correlation on the single jet: each nozzle of an array serves a cell of the surface,
+   * and a single jet averaged over a disc of the same area has the same relative nozzle area, f = A_r = D²/(4r²).
+   * Neighbouring wall jets collide and the spent gas leaves between the nozzles, so arrays transfer less; the
+   * relation is used only near the nozzle plate (H/D ≤ 3), where Martin's interaction factor K is within 1 % of 1.
+   */
+  'jet-array-cell': {
+    relation: 'one cell of a jet array as a single jet averaged over a disc of the same area (f = D²/(4r²); H/D ≤ 3)',
+    inputs: (i) => ({ f: 1 / (4 * i.r_over_D * i.r_over_D) }),
+    expected: (o) => ({ Nu_D: o.Nu_D }),
+    rel: 0.2,
+    relUncertainty: 'colliding wall jets lower an array’s mean below the single jet’s by 10–30 % in Martin’s own two forms at H/D ≤ 3; 20 % is a judgement',
+  },
+  /** The same relation read from the array: the single jet over a disc of radius r = D/(2√f). */
+  'jet-single-cell': {
+    relation: 'a single jet averaged over a disc of the area one nozzle of the array serves (r/D = 1/(2√f); H/D ≤ 3)',
+    inputs: (i) => ({ r_over_D: 1 / (2 * Math.sqrt(i.f)) }),
+    expected: (o) => ({ Nu_D: o.Nu_D }),
+    rel: 0.2,
+    relUncertainty: 'colliding wall jets lower an array’s mean below the single jet’s by 10–30 % in Martin’s own two forms at H/D ≤ 3; 20 % is a judgement',
+  },
 };

@@ -9,7 +9,7 @@ import { annular, pin, solveFin, straightRectangular, straightTriangular } from 
 import { counterflowEffectiveness, counterflowMeanTemperatureDifference, crossflowEffectiveness, crossflowUnmixedSeries, nShellsEffectiveness, oneShellTwoTubeCorrectionFactor, oneShellTwoTubePassEffectiveness, parallelFlowEffectiveness, singleStreamEffectiveness } from './exchangers';
 import { annulusFd, parallelPlatesFd, rectangularDuctFd, rectangularDuctFrictionSeries } from './ducts';
 import { alignedRectanglesViewFactor, blackbodyFraction, coaxialDisksViewFactor, parallelPlatesExchangeSeries, parallelStripsViewFactor, perpendicularRectanglesViewFactor, sphereToDiskViewFactor } from './radiation';
-import { nusseltTubeColumn, sparrowGreggPlate } from './films';
+import { nusseltTubeColumn, sparrowGreggPlate, vapourFilmCylinder } from './films';
 import { apparentFrictionFanning, thermalEntrance } from './entrance';
 import { graetzMeanNusselt } from './similarity';
 
@@ -161,6 +161,17 @@ describe('film condensation (films.ts)', () => {
     const one = nusseltTubeColumn({ ...p, N: 1 });
     expect(rel(one.first / group, 0.728)).toBeLessThan(1e-3);
     expect(rel(nusseltTubeColumn({ ...p, N: 6 }).mean, one.first * 6 ** -0.25)).toBeLessThan(2e-3);
+  });
+
+  it('the vapour film of film boiling lies between 0.728 (shear-free interface, Nusselt’s constant) and 0.515 = 0.728·4^(−¼) (still liquid), bracketing Bromley’s (1950) fitted 0.62', () => {
+    // Steam at 1 atm with a 500 K wall: vapour at the film temperature (about 623 K; from memory, 1 % is enough here).
+    const p = { rho_l: 958.4, rho_v: 0.3524, mu_v: 2.16e-5, k_v: 0.0465, hfg: 3.0e6, dT: 500, D: 0.01 };
+    const group = ((9.80665 * p.k_v ** 3 * p.rho_v * (p.rho_l - p.rho_v) * p.hfg) / (p.mu_v * p.D * p.dT)) ** 0.25;
+    const b = vapourFilmCylinder(p);
+    expect(rel(b.freeSurface / group, 0.728)).toBeLessThan(1e-3);
+    expect(rel(b.stillLiquid / group, 0.728 * 4 ** -0.25)).toBeLessThan(1e-3);
+    expect(b.stillLiquid / group).toBeLessThan(0.62);
+    expect(b.freeSurface / group).toBeGreaterThan(0.62);
   });
 });
 
