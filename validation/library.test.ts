@@ -6,7 +6,7 @@ import { DEFAULT_POLICY, meetsPolicy } from '@/lib/engine/evidence';
 import type { ValidationReport } from '@/lib/engine/validate';
 import { execFileSync } from 'node:child_process';
 import { crossCheckTolerance } from '@/lib/engine/evidence';
-import { CIRCULARITY_POINTS, isRetypedCrossCheck, REFERENCES, referenceKey } from '@/validation/reference/formulas';
+import { CIRCULARITY_POINTS, isRetypedCrossCheck, REFERENCE_DOMAINS, REFERENCES, referenceKey } from '@/validation/reference/formulas';
 import { crossCheckExpected, isPlanned, parseCrossCheckLocator, plannedCases, PYTHON_EVAL } from '@/validation/reference/evidence-plan';
 import { MAPPINGS } from '@/validation/reference/mappings';
 import { db } from '@/models';
@@ -14,13 +14,16 @@ import { closeSequelize } from '@/lib/db/connection';
 
 const library = readLibrary();
 /** Points spread over a definition's validity box, log-spaced where a range spans two decades or more. */
-function pointsIn(def: Definition, n: number, cases: CheckCase[]): Record<string, number>[] {
+function pointsIn(def: Definition, n: number, cases: CheckCase[], domain: Record<string, [number, number]> = {}): Record<string, number>[] {
   const axes = def.inputs.map((i) => {
     // Bounded inputs sweep their validity range; an open end is closed by the span of the check cases.
     const seen = cases.map((c) => c.inputs[i.symbol]).map((v) => (typeof v === 'number' ? v : v?.value)).filter((v): v is number => Number.isFinite(v));
     let { min, max } = boundsOf(def, i.symbol);
     if (min === undefined || min === 0) min = seen.length ? Math.min(...seen) : 0.5;
     if (max === undefined) max = seen.length ? Math.max(...seen) : min * 1000;
+    // A reference that holds on part of the box (formulas.ts#REFERENCE_DOMAINS) is swept there.
+    const d = domain[i.symbol];
+    if (d) { min = Math.max(min, d[0]); max = Math.min(max, d[1]); }
     if (!(max > min)) max = min > 0 ? min * 10 : min + 1;
     return { s: i.symbol, min, max };
   });
@@ -144,7 +147,7 @@ describe('standard library definition files', () => {
         const sweep = (cases: CheckCase[]) => {
           let agreeing = 0;
           let compared = 0;
-          for (const p of pointsIn(def, n, cases)) {
+          for (const p of pointsIn(def, n, cases, REFERENCE_DOMAINS[key])) {
             let out: Record<string, number>;
             try { out = c.evaluate(p).outputs; } catch { continue; }
             let ref: Record<string, number>;

@@ -2,8 +2,11 @@ import type { Definition } from './types';
 
 /** The declared bounds of a symbol (first min and first max among its limits). Free of mathjs. */
 export function boundsOf(def: Pick<Definition, 'validity'>, symbol: string): { min?: number; max?: number } {
+  // Several rules on one symbol (a published range and a narrower one the evidence supports): the box where none warns.
   const lims = (def.validity ?? []).filter((l) => l.symbol === symbol);
-  return { min: lims.find((l) => l.min !== undefined)?.min, max: lims.find((l) => l.max !== undefined)?.max };
+  const mins = lims.map((l) => l.min).filter((v): v is number => v !== undefined);
+  const maxes = lims.map((l) => l.max).filter((v): v is number => v !== undefined);
+  return { min: mins.length ? Math.max(...mins) : undefined, max: maxes.length ? Math.min(...maxes) : undefined };
 }
 
 /** True when a range is wide enough (two decades) to be read on a logarithmic scale. */

@@ -106,8 +106,13 @@ function coverageOf(c: Evaluator, cases: CheckCase[], results: CaseResult[]): Va
     // Published limits first; a table's range stands in where the definition declares none.
     const own = c.limits.filter((l) => l.symbol === inp.symbol && !l.note?.startsWith('table:'));
     const any = c.limits.filter((l) => l.symbol === inp.symbol);
-    const min = own.find((l) => l.min !== undefined)?.min ?? any.find((l) => l.min !== undefined)?.min;
-    const max = own.find((l) => l.max !== undefined)?.max ?? any.find((l) => l.max !== undefined)?.max;
+    // Several rules on one symbol: the box where none warns (the largest minimum, the smallest maximum).
+    const tightest = (ls: typeof own, side: 'min' | 'max') => {
+      const v = ls.map((l) => l[side]).filter((x): x is number => x !== undefined);
+      return v.length ? (side === 'min' ? Math.max(...v) : Math.min(...v)) : undefined;
+    };
+    const min = tightest(own, 'min') ?? tightest(any, 'min');
+    const max = tightest(own, 'max') ?? tightest(any, 'max');
     if (min === undefined || max === undefined) return;
     const log = isLogRange(min, max);
     const pos = (x: number) => (log ? (Math.log(x) - Math.log(min)) / (Math.log(max) - Math.log(min)) : (x - min) / (max - min));

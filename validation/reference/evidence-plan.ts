@@ -129,6 +129,9 @@ const GOLDSTEIN = 'Goldstein, Behbahani & Heppelmann (1986) Int. J. Heat Mass Tr
 /** Huber & Viskanta (1994): mean Nusselt number under a square 3 × 3 array of round jets of pitch S (recalled). */
 const huberViskanta1994 = (i: Record<string, number>) => 0.285 * i.Re_D ** 0.71 * i.Pr ** 0.33 * i.H_over_D ** -0.123 * Math.sqrt(Math.PI / (4 * i.f)) ** -0.725;
 const HUBER = 'Huber & Viskanta (1994) Int. J. Heat Mass Transfer 37(18):2859–2869, square arrays of air jets: Nu = 0.285 Re^0.71 Pr^0.33 (H/D)^(−0.123) (S/D)^(−0.725) for 3,400 ≤ Re ≤ 20,500, 0.25 ≤ H/D ≤ 6, 4 ≤ S/D ≤ 8, with S/D = (π/(4f))^½ (from memory); tolerance √(15 %² + 15 %²) for Martin’s stated accuracy and the recalled fit’s scatter';
+/** Kuehn & Goldstein (1976) numerical k_eq for D_o/D_i = 2.6 (L/D_i = 0.8), Pr = 0.706 (recalled). */
+const KUEHN_GOLDSTEIN: Record<number, number> = { 1e4: 2.01, 5e4: 3.024 };
+const ANNULUS = 'The laminar Boussinesq equations between two horizontal concentric cylinders, stream function and vorticity on two polar grids, Richardson-extrapolated — validation/reference/annulus.ts';
 const AIR = 'Air(T={T}, P={P})';
 const AIR_CITE = 'Lemmon et al. (2000) equation of state, Lemmon & Jacobsen (2004) transport, computed by python3-iapws';
 
@@ -473,6 +476,13 @@ export const PLAN: Planned[] = [
   xc('minor-loss-sudden-expansion-hooper', 'minor-loss-sudden-expansion-borda-carnot', [{ beta: 0.3, Re_1: 2e4, f_D: 0.026 }, { beta: 0.6, Re_1: 1e6, f_D: 0.0117 }]),
   cp('minor-loss-sudden-expansion-hooper', 'exit-loss-turbulent', 0.1, [{ beta: 0, Re_1: 1e5, f_D: 0.018 }], 'A pipe discharging into a large vessel (β = 0) loses one velocity head in turbulent flow (common practice; measured 1.0–1.1)', 'the non-uniform turbulent profile carries up to 10 % more kinetic energy than its mean velocity'),
   lim('minor-loss-sudden-expansion-hooper', 'exit-loss-laminar', 0.01, [{ beta: 0, Re_1: 500, f_D: 0.02 }], 'A developed laminar flow discharging into a large vessel loses its whole kinetic energy, α = 2 velocity heads for the Poiseuille profile (exact)', 'exact for a developed profile; 1 % for the profile’s development in a real pipe'),
+
+  // ——— concentric cylinders: the laminar annulus solved here, the published numerical solution recalled ———
+  // Solved over 3×10³ ≤ Ra_L ≤ 5×10⁴ (500 ≤ Ra_c* ≤ 9000), the correlation is always above the laminar solution: 3–8 % in
+  // air, 7–12 % at Pr = 1, 10–14 % at Pr = 1.5 and 18–28 % at Pr = 5–100 (Ra_c* ≤ 1.7×10⁴). Its stated accuracy says so
+  // (±15 %), and the library warns above Pr = 1.5, where the published range goes on to 6000.
+  ind('enclosure-concentric-cylinders-raithby-hollands', 'annulus-laminar-solution', 0.01, [{ Ra_L: 3e3, Pr: 0.71, Do_over_Di: 2.6 }, { Ra_L: 1e4, Pr: 0.71, Do_over_Di: 2.6 }, { Ra_L: 5e4, Pr: 0.71, Do_over_Di: 2.6 }, { Ra_L: 3e4, Pr: 0.71, Do_over_Di: 2 }, { Ra_L: 1e4, Pr: 1.5, Do_over_Di: 2.6 }, { Ra_L: 3e3, Pr: 1.5, Do_over_Di: 3 }], ANNULUS, 'the correlation’s stated 15 % with 1 % for the extrapolated grids'),
+  mem('enclosure-concentric-cylinders-raithby-hollands', { k_eff_over_k: 1 }, 0.153, [{ Ra_L: 1e4, Pr: 0.706, Do_over_Di: 2.6 }, { Ra_L: 5e4, Pr: 0.706, Do_over_Di: 2.6 }], 'Kuehn & Goldstein (1976) J. Fluid Mech. 74:695–719, numerical solution for L/D_i = 0.8, Pr = 0.706: k_eq = 2.010 at Ra_L = 10⁴ and 3.024 at 5×10⁴ (from memory); tolerance √(15 %² + 3 %²) for the stated accuracy and their coarse grid', (i) => KUEHN_GOLDSTEIN[i.Ra_L]),
 ];
 
 /** The partner's inputs: the case's values for the symbols it shares, then the fixed ones the locator names. */

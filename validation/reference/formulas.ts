@@ -13,6 +13,7 @@ import { apparentFrictionFanning, thermalEntrance } from './entrance';
 import { alignedRectanglesViewFactor, blackbodyFraction, coaxialDisksViewFactor, parallelPlatesExchangeSeries, parallelStripsViewFactor, perpendicularRectanglesViewFactor, sphereToDiskViewFactor } from './radiation';
 import { nusseltTubeColumn, sparrowGreggPlate, vapourFilmCylinder } from './films';
 import { nShellsEffectiveness } from './exchangers';
+import { annulusEquivalentConductivity } from './annulus';
 import { counterflowEffectiveness, counterflowMeanTemperatureDifference, crossflowEffectiveness, crossflowUnmixedSeries, oneShellTwoTubeCorrectionFactor, oneShellTwoTubePassEffectiveness, parallelFlowEffectiveness, singleStreamEffectiveness } from './exchangers';
 import { blasius, graetzMeanNusselt, graetzNusseltUWT, levequeUniformFluxCoefficient, ostrachG, simpsonSamples, pohlhausenNusseltCoefficient, powerLawWallNusseltCoefficient, thermalThicknessEta } from './similarity';
 
@@ -355,9 +356,18 @@ Object.assign(REFERENCES, {
   'vf-numeric-perpendicular-rectangles': ({ X, Y, Z }: Inputs) => ({ F_12: perpendicularRectanglesViewFactor(X, Y, Z) }),
 });
 
+/**
+ * References that hold on part of a definition's validity box only: the circularity test samples inside this box
+ * (each input's range clipped to it) instead of the whole validity box.
+ */
+export const REFERENCE_DOMAINS: Record<string, Record<string, [number, number]>> = {
+  'annulus-laminar-solution': { Ra_L: [3e3, 5e4], Pr: [0.7, 1.5], Do_over_Di: [2, 3] },
+};
+
 /** References too costly to evaluate at 240 points in the circularity test: the number of points it uses instead. */
 export const CIRCULARITY_POINTS: Record<string, number> = {
   'duct-fd-rectangular': 24,
+  'annulus-laminar-solution': 3,
   'vf-numeric-disks': 24,
   'vf-numeric-aligned-rectangles': 24,
   'vf-numeric-perpendicular-rectangles': 48,
@@ -383,6 +393,8 @@ Object.assign(REFERENCES, {
     const b = vapourFilmCylinder({ rho_l: i.rho_l, rho_v: i.rho_v, mu_v: i.mu_v, k_v: i.k_v, hfg, dT, D: i.D });
     return { h_conv: Math.sqrt(b.freeSurface * b.stillLiquid) };
   },
+  // Concentric horizontal cylinders: the laminar Boussinesq equations solved on two grids (annulus.ts).
+  'annulus-laminar-solution': ({ Ra_L, Pr, Do_over_Di }: Inputs) => ({ k_eff_over_k: annulusEquivalentConductivity(Ra_L, Pr, Do_over_Di) }),
   // Below the onset of cells the layer only conducts: Nu = 1.
   'conduction-layer': () => ({ Nu_L: 1 }),
 });

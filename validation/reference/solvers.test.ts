@@ -10,6 +10,7 @@ import { counterflowEffectiveness, counterflowMeanTemperatureDifference, crossfl
 import { annulusFd, parallelPlatesFd, rectangularDuctFd, rectangularDuctFrictionSeries } from './ducts';
 import { alignedRectanglesViewFactor, blackbodyFraction, coaxialDisksViewFactor, parallelPlatesExchangeSeries, parallelStripsViewFactor, perpendicularRectanglesViewFactor, sphereToDiskViewFactor } from './radiation';
 import { nusseltTubeColumn, sparrowGreggPlate, vapourFilmCylinder } from './films';
+import { annulusEquivalentConductivity, annulusGrid } from './annulus';
 import { apparentFrictionFanning, thermalEntrance } from './entrance';
 import { graetzMeanNusselt } from './similarity';
 
@@ -190,4 +191,25 @@ describe('developing laminar tube flow (entrance.ts)', () => {
     expect(k).toBeGreaterThan(1.2);
     expect(k).toBeLessThan(1.3);
   });
+});
+
+describe('natural convection between concentric cylinders (annulus.ts)', () => {
+  it('conducts when buoyancy is negligible: k_eq → 1 (the conduction solution ln(r_o/r)/ln(r_o/r_i) is exact)', () => {
+    // The one-sided wall gradient of the logarithmic profile has a second-order error: extrapolated as in the solver.
+    const [c, f] = [24, 36].map((n) => annulusGrid(1, 0.71, 2.6, n, Math.round(n * 2.5)));
+    expect(Math.abs(f.kInner + (f.kInner - c.kInner) / 1.25 - 1)).toBeLessThan(1e-3);
+    expect(Math.abs(f.kOuter + (f.kOuter - c.kOuter) / 1.25 - 1)).toBeLessThan(1e-3);
+  }, 60_000);
+
+  it('matches the numerical solution of Kuehn & Goldstein (1976, J. Fluid Mech. 74:695; L/D_i = 0.8, Pr = 0.706: k_eq = 2.010 at Ra_L = 10⁴, 3.024 at 5×10⁴; from memory) within 4 %: 1 % for this extrapolation (a finer pair moves it up by 0.4–1.2 %) and about 3 % for their coarser grid (judged)', () => {
+    expect(Math.abs(annulusEquivalentConductivity(1e4, 0.706, 2.6) / 2.01 - 1)).toBeLessThan(0.04);
+    expect(Math.abs(annulusEquivalentConductivity(5e4, 0.706, 2.6) / 3.024 - 1)).toBeLessThan(0.04);
+  }, 60_000);
+
+  it('converges with the grid at second order: the error falls by about (3/2)² from 24 to 36 cells across the gap', () => {
+    const k = [16, 24, 36].map((n) => annulusGrid(1e4, 0.71, 2.6, n, Math.round(n * 2.5)).kEq);
+    const ratio = (k[0] - k[1]) / (k[1] - k[2]);
+    expect(ratio).toBeGreaterThan(1.8);
+    expect(ratio).toBeLessThan(3.2);
+  }, 60_000);
 });
