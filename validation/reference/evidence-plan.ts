@@ -483,6 +483,10 @@ export const PLAN: Planned[] = [
   // (±15 %), and the library warns above Pr = 1.5, where the published range goes on to 6000.
   ind('enclosure-concentric-cylinders-raithby-hollands', 'annulus-laminar-solution', 0.01, [{ Ra_L: 3e3, Pr: 0.71, Do_over_Di: 2.6 }, { Ra_L: 1e4, Pr: 0.71, Do_over_Di: 2.6 }, { Ra_L: 5e4, Pr: 0.71, Do_over_Di: 2.6 }, { Ra_L: 3e4, Pr: 0.71, Do_over_Di: 2 }, { Ra_L: 1e4, Pr: 1.5, Do_over_Di: 2.6 }, { Ra_L: 3e3, Pr: 1.5, Do_over_Di: 3 }], ANNULUS, 'the correlation’s stated 15 % with 1 % for the extrapolated grids'),
   mem('enclosure-concentric-cylinders-raithby-hollands', { k_eff_over_k: 1 }, 0.153, [{ Ra_L: 1e4, Pr: 0.706, Do_over_Di: 2.6 }, { Ra_L: 5e4, Pr: 0.706, Do_over_Di: 2.6 }], 'Kuehn & Goldstein (1976) J. Fluid Mech. 74:695–719, numerical solution for L/D_i = 0.8, Pr = 0.706: k_eq = 2.010 at Ra_L = 10⁴ and 3.024 at 5×10⁴ (from memory); tolerance √(15 %² + 3 %²) for the stated accuracy and their coarse grid', (i) => KUEHN_GOLDSTEIN[i.Ra_L]),
+
+  // ——— mixed convection in a vertical tube: the tabulated series solution against finite differences, and its forced limit ———
+  num('pipe-laminar-mixed-convection-vertical-uhf', 'mixed-vertical-tube-fd', 1e-4, [{ Ra_A: -97, Re_D: 900 }, { Ra_A: -23.3, Re_D: 1500 }, { Ra_A: 37, Re_D: 500 }, { Ra_A: 433, Re_D: 2000 }, { Ra_A: 2718, Re_D: 1200 }, { Ra_A: 8765, Re_D: 300 }], 'The fully developed equations (Morton 1960) by second-order finite differences on 200 and 400 cells, Richardson-extrapolated — validation/reference/mixed.ts', 'the table interpolates the series solution of the same model within 1e-5 and the finite differences leave about 1e-6: tolerance 1e-4'),
+  lim('pipe-laminar-mixed-convection-vertical-uhf', 'uhf-poiseuille', 1e-6, [{ Ra_A: 0, Re_D: 1000 }], 'Without buoyancy the profile is Poiseuille’s and a uniform flux gives Nu = 48/11 (exact)', 'exact; the table holds the row Ra = 0 to ten digits'),
 ];
 
 /** The partner's inputs: the case's values for the symbols it shares, then the fixed ones the locator names. */

@@ -14,6 +14,7 @@ import { alignedRectanglesViewFactor, blackbodyFraction, coaxialDisksViewFactor,
 import { nusseltTubeColumn, sparrowGreggPlate, vapourFilmCylinder } from './films';
 import { nShellsEffectiveness } from './exchangers';
 import { annulusEquivalentConductivity } from './annulus';
+import { verticalTubeMixedNusselt } from './mixed';
 import { counterflowEffectiveness, counterflowMeanTemperatureDifference, crossflowEffectiveness, crossflowUnmixedSeries, oneShellTwoTubeCorrectionFactor, oneShellTwoTubePassEffectiveness, parallelFlowEffectiveness, singleStreamEffectiveness } from './exchangers';
 import { blasius, graetzMeanNusselt, graetzNusseltUWT, levequeUniformFluxCoefficient, ostrachG, simpsonSamples, pohlhausenNusseltCoefficient, powerLawWallNusseltCoefficient, thermalThicknessEta } from './similarity';
 
@@ -368,6 +369,7 @@ export const REFERENCE_DOMAINS: Record<string, Record<string, [number, number]>>
 export const CIRCULARITY_POINTS: Record<string, number> = {
   'duct-fd-rectangular': 24,
   'annulus-laminar-solution': 3,
+  'mixed-vertical-tube-fd': 30,
   'vf-numeric-disks': 24,
   'vf-numeric-aligned-rectangles': 24,
   'vf-numeric-perpendicular-rectangles': 48,
@@ -395,6 +397,10 @@ Object.assign(REFERENCES, {
   },
   // Concentric horizontal cylinders: the laminar Boussinesq equations solved on two grids (annulus.ts).
   'annulus-laminar-solution': ({ Ra_L, Pr, Do_over_Di }: Inputs) => ({ k_eff_over_k: annulusEquivalentConductivity(Ra_L, Pr, Do_over_Di) }),
+  // Fully developed laminar mixed convection in a vertical tube with a uniform flux, by finite differences (mixed.ts).
+  'mixed-vertical-tube-fd': ({ Ra_A }: Inputs) => ({ Nu_D: verticalTubeMixedNusselt(Ra_A) }),
+  // Without buoyancy the fully developed profile is Poiseuille's and Nu = 48/11 with a uniform flux (exact).
+  'uhf-poiseuille': () => ({ Nu_D: 48 / 11 }),
   // Below the onset of cells the layer only conducts: Nu = 1.
   'conduction-layer': () => ({ Nu_L: 1 }),
 });

@@ -11,6 +11,7 @@ import { annulusFd, parallelPlatesFd, rectangularDuctFd, rectangularDuctFriction
 import { alignedRectanglesViewFactor, blackbodyFraction, coaxialDisksViewFactor, parallelPlatesExchangeSeries, parallelStripsViewFactor, perpendicularRectanglesViewFactor, sphereToDiskViewFactor } from './radiation';
 import { nusseltTubeColumn, sparrowGreggPlate, vapourFilmCylinder } from './films';
 import { annulusEquivalentConductivity, annulusGrid } from './annulus';
+import { verticalTubeMixedGrid, verticalTubeMixedNusselt } from './mixed';
 import { apparentFrictionFanning, thermalEntrance } from './entrance';
 import { graetzMeanNusselt } from './similarity';
 
@@ -212,4 +213,24 @@ describe('natural convection between concentric cylinders (annulus.ts)', () => {
     expect(ratio).toBeGreaterThan(1.8);
     expect(ratio).toBeLessThan(3.2);
   }, 60_000);
+});
+
+describe('mixed convection in a vertical tube (mixed.ts)', () => {
+  it('without buoyancy gives the Poiseuille value with a uniform flux, Nu = 48/11 (Shah & London 1978; exact)', () => {
+    expect(Math.abs(verticalTubeMixedNusselt(0) - 48 / 11)).toBeLessThan(1e-6);
+  });
+
+  it('converges at second order and finds the flow reversal of opposing flow where the series solution does (Ra = −104.36, scripts/mixed-convection-table.py)', () => {
+    const nu = [100, 200, 400].map((n) => verticalTubeMixedGrid(500, n).nu);
+    const ratio = (nu[0] - nu[1]) / (nu[1] - nu[2]);
+    expect(ratio).toBeGreaterThan(3.8);
+    expect(ratio).toBeLessThan(4.2);
+    expect(verticalTubeMixedGrid(-104, 400).wallSlope).toBeLessThan(0);
+    expect(verticalTubeMixedGrid(-104.8, 400).wallSlope).toBeGreaterThan(0);
+  });
+
+  it('aiding buoyancy raises and opposing buoyancy lowers the Nusselt number', () => {
+    expect(verticalTubeMixedNusselt(1000)).toBeGreaterThan(48 / 11);
+    expect(verticalTubeMixedNusselt(-50)).toBeLessThan(48 / 11);
+  });
 });
