@@ -23,6 +23,7 @@ function pointsIn(def: Definition, n: number, cases: CheckCase[], domain: Record
     if (max === undefined) max = seen.length ? Math.max(...seen) : min * 1000;
     // A reference that holds on part of the box (formulas.ts#REFERENCE_DOMAINS) is swept there.
     const d = domain[i.symbol];
+    if (d && d[0] === d[1]) return { s: i.symbol, min: d[0], max: d[0] }; // one value (a row of a table)
     if (d) { min = Math.max(min, d[0]); max = Math.min(max, d[1]); }
     if (!(max > min)) max = min > 0 ? min * 10 : min + 1;
     return { s: i.symbol, min, max };
@@ -32,6 +33,7 @@ function pointsIn(def: Definition, n: number, cases: CheckCase[], domain: Record
     const raw = (((k + 0.5) / n) * (j + 1) * 0.7548776662 + j * 0.569840291) % 1;
     // The first input takes n values; the others 6 levels each (the similarity references solve once per Pr).
     const u = j === 0 ? raw : (Math.floor(raw * 6) + 0.5) / 6;
+    if (a.min === a.max) return [a.s, a.min];
     return [a.s, isLogRange(a.min, a.max) ? Math.exp(Math.log(a.min) + u * (Math.log(a.max) - Math.log(a.min))) : a.min + u * (a.max - a.min)];
   })));
 }

@@ -132,6 +132,11 @@ const HUBER = 'Huber & Viskanta (1994) Int. J. Heat Mass Transfer 37(18):2859–
 /** Kuehn & Goldstein (1976) numerical k_eq for D_o/D_i = 2.6 (L/D_i = 0.8), Pr = 0.706 (recalled). */
 const KUEHN_GOLDSTEIN: Record<number, number> = { 1e4: 2.01, 5e4: 3.024 };
 const ANNULUS = 'The laminar Boussinesq equations between two horizontal concentric cylinders, stream function and vorticity on two polar grids, Richardson-extrapolated — validation/reference/annulus.ts';
+/** Crane TP-410 equivalent lengths (L/D)_eq and fully turbulent friction factors f_T of clean steel pipe by nominal size (recalled). */
+const CRANE_LD: Record<number, number> = { 1: 30, 5: 16, 7: 50, 11: 8, 12: 340, 13: 3, 14: 100 };
+const CRANE_FT: Record<number, number> = { 1: 0.023, 2: 0.019, 4: 0.017, 8: 0.014 };
+const crane = (i: Record<string, number>) => CRANE_LD[i.fitting] * CRANE_FT[Math.round(i.D / 0.0254)];
+const CRANE = 'Crane Co. (1988) Flow of Fluids through Valves, Fittings and Pipe, Technical Paper 410: K = (L/D)_eq f_T in fully turbulent flow, (L/D)_eq = 30 for a standard 90° elbow, 16 for a 45° elbow, 50 for a close return bend, 8 for a gate valve, 340 for a globe valve, 3 for a ball valve, 100 for a swing check valve; f_T = 0.023, 0.019, 0.017, 0.014 at 1, 2, 4, 8 in (from memory); tolerance √(10 %² + 10 %²)';
 const AIR = 'Air(T={T}, P={P})';
 const AIR_CITE = 'Lemmon et al. (2000) equation of state, Lemmon & Jacobsen (2004) transport, computed by python3-iapws';
 
@@ -487,6 +492,16 @@ export const PLAN: Planned[] = [
   // ——— mixed convection in a vertical tube: the tabulated series solution against finite differences, and its forced limit ———
   num('pipe-laminar-mixed-convection-vertical-uhf', 'mixed-vertical-tube-fd', 1e-4, [{ Ra_A: -97, Re_D: 900 }, { Ra_A: -23.3, Re_D: 1500 }, { Ra_A: 37, Re_D: 500 }, { Ra_A: 433, Re_D: 2000 }, { Ra_A: 2718, Re_D: 1200 }, { Ra_A: 8765, Re_D: 300 }], 'The fully developed equations (Morton 1960) by second-order finite differences on 200 and 400 cells, Richardson-extrapolated — validation/reference/mixed.ts', 'the table interpolates the series solution of the same model within 1e-5 and the finite differences leave about 1e-6: tolerance 1e-4'),
   lim('pipe-laminar-mixed-convection-vertical-uhf', 'uhf-poiseuille', 1e-6, [{ Ra_A: 0, Re_D: 1000 }], 'Without buoyancy the profile is Poiseuille’s and a uniform flux gives Nu = 48/11 (exact)', 'exact; the table holds the row Ra = 0 to ten digits'),
+
+  // ——— fittings: Darby's 3-K table against Hooper's 2-K constants and Crane's equivalent lengths ———
+  // Checked against Hooper only where his constants are recalled with confidence (elbows, gate and globe valves). As recalled,
+  // Hooper's tee run (200, 0.10) lies 55–60 % below Darby and Crane, his check valves 11–32 % above: not used.
+  xc('minor-loss-fittings-three-k-table', 'minor-loss-two-k-hooper', [{ fitting: 1, Re: 1e5, D: 0.0508 }], { K_1: 800, K_inf: 0.4 }),
+  xc('minor-loss-fittings-three-k-table', 'minor-loss-two-k-hooper', [{ fitting: 3, Re: 2e5, D: 0.1016 }], { K_1: 800, K_inf: 0.25 }),
+  xc('minor-loss-fittings-three-k-table', 'minor-loss-two-k-hooper', [{ fitting: 11, Re: 5e4, D: 0.0508 }], { K_1: 300, K_inf: 0.1 }),
+  xc('minor-loss-fittings-three-k-table', 'minor-loss-two-k-hooper', [{ fitting: 12, Re: 1e6, D: 0.2032 }], { K_1: 1500, K_inf: 4 }),
+  mem('minor-loss-fittings-three-k-table', { K: 1 }, 0.142, [{ fitting: 1, Re: 1e7, D: 0.0254 }, { fitting: 5, Re: 1e7, D: 0.0508 }, { fitting: 7, Re: 1e7, D: 0.1016 }, { fitting: 12, Re: 1e7, D: 0.0508 }, { fitting: 13, Re: 1e7, D: 0.1016 }, { fitting: 14, Re: 1e7, D: 0.2032 }], CRANE, crane),
+  lim('minor-loss-fittings-three-k-table', 'fitting-row-laminar-limit', 0.01, [{ fitting: 12, Re: 1, D: 0.0508 }, { fitting: 5, Re: 2, D: 0.0254 }], 'In creeping flow the loss is viscous: K → K₁/Re, with Hooper’s (1981) laminar constant of the fitting (from memory)', 'the turbulent part is under 0.6 % of K at Re ≤ 2'),
 ];
 
 /** The partner's inputs: the case's values for the symbols it shares, then the fixed ones the locator names. */

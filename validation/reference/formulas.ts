@@ -359,10 +359,12 @@ Object.assign(REFERENCES, {
 
 /**
  * References that hold on part of a definition's validity box only: the circularity test samples inside this box
- * (each input's range clipped to it) instead of the whole validity box.
+ * (each input's range clipped to it; a range of one value holds that input fixed) instead of the whole validity box.
  */
 export const REFERENCE_DOMAINS: Record<string, Record<string, [number, number]>> = {
   'annulus-laminar-solution': { Ra_L: [3e3, 5e4], Pr: [0.7, 1.5], Do_over_Di: [2, 3] },
+  // A row of a fitting table: one value (rows between fittings are refused).
+  'fitting-row-laminar-limit': { fitting: [12, 12] },
 };
 
 /** References too costly to evaluate at 240 points in the circularity test: the number of points it uses instead. */
@@ -434,6 +436,9 @@ Object.assign(REFERENCES, {
   'sharp-entrance': () => ({ K: 0.5 }),
   // In creeping flow a fitting's loss is viscous: K → K₁/Re.
   'fitting-laminar-limit': ({ Re, K_1 }: Inputs) => ({ K: K_1 / Re }),
+  // The same limit for a row of a fitting table, with Hooper's (1981) laminar constant of that fitting (from memory): the
+  // 3-K and 2-K methods share K₁, so a table row whose K₁ was mistyped leaves the limit.
+  'fitting-row-laminar-limit': ({ fitting, Re }: Inputs) => ({ K: ({ 1: 800, 3: 800, 5: 500, 11: 300, 12: 1500 } as Record<number, number>)[fitting] / Re }),
   // Saturated water at 1 atm boiling at 10⁵ W/m² runs about 10 K above saturation (common practice).
   'water-nucleate-rule': () => ({ dT_e: 10 }),
   'pressure-identity': ({ nu_ref, alpha_ref }: Inputs) => ({ nu: nu_ref, alpha: alpha_ref }),
