@@ -1,6 +1,6 @@
 import type { Definition } from './types';
 
-/** The declared bounds of a symbol (first min and first max among its limits). Free of mathjs. */
+/** The declared bounds of a symbol: the largest minimum and the smallest maximum among its limits. Free of mathjs. */
 export function boundsOf(def: Pick<Definition, 'validity'>, symbol: string): { min?: number; max?: number } {
   // Several rules on one symbol (a published range and a narrower one the evidence supports): the box where none warns.
   const lims = (def.validity ?? []).filter((l) => l.symbol === symbol);

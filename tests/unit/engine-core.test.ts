@@ -3,6 +3,7 @@ import {
   compileDefinition, compareDefinitions, contentHash, canonicalJson, validateVersion, convert, brent, interpolate,
   EvaluationError, InputError, DefinitionError, type Definition,
 } from '@/lib/engine';
+import { boundsOf } from '@/lib/engine/ranges';
 import { blasius, pohlhausenNusseltCoefficient } from '@/validation/reference/similarity';
 
 const base = (over: Partial<Definition>): Definition => ({
@@ -154,6 +155,16 @@ describe('validation report', () => {
     expect(report.stages.find((s) => s.stage === 'coverage')!.passed).toBe(false);
     const spread = [...cases, { ...cases[0], label: 'high', inputs: { Re_x: 3e5, Pr: 30 }, expected: { Nu_x: 0.332 * Math.sqrt(3e5) * Math.cbrt(30) } }];
     expect(validateVersion(bounded, spread).coverage.oneCorner).toBe(false);
+  });
+
+  it('reads several rules on one symbol as the box where none warns (a published range and a narrower checked one)', () => {
+    const twoRules = { ...laminarLocal, validity: [{ symbol: 'Pr', min: 0.6, max: 50 }, { symbol: 'Pr', max: 5, note: 'checked only up to 5' }, { symbol: 'Re_x', min: 10, max: 5e5 }] };
+    expect(boundsOf(twoRules, 'Pr')).toEqual({ min: 0.6, max: 5 });
+    const pr = validateVersion(twoRules, cases).coverage.entries.find((e) => e.symbol === 'Pr')!;
+    expect([pr.min, pr.max]).toEqual([0.6, 5]);
+    // Pr = 30 is inside the published range but beyond the checked one: the rule warns.
+    const r = compileDefinition(twoRules).evaluate({ Re_x: 1e4, Pr: 30 });
+    expect(r.warnings.map((w) => w.symbol)).toEqual(['Pr']);
   });
 
   it('fails a check case outside its tolerance and one whose expected warning does not come', () => {
