@@ -2,8 +2,15 @@ import type { Definition } from './types';
 
 /** The declared bounds of a symbol: the largest minimum and the smallest maximum among its limits. Free of mathjs. */
 export function boundsOf(def: Pick<Definition, 'validity'>, symbol: string): { min?: number; max?: number } {
-  // Several rules on one symbol (a published range and a narrower one the evidence supports): the box where none warns.
-  const lims = (def.validity ?? []).filter((l) => l.symbol === symbol);
+  return boundsAmong(def.validity ?? [], symbol);
+}
+
+/**
+ * The same over any list of limits (declared or compiled). Several rules on one symbol (a published range and a
+ * narrower one the evidence supports) give the box where none warns.
+ */
+export function boundsAmong(limits: readonly { symbol: string; min?: number; max?: number }[], symbol: string): { min?: number; max?: number } {
+  const lims = limits.filter((l) => l.symbol === symbol);
   const mins = lims.map((l) => l.min).filter((v): v is number => v !== undefined);
   const maxes = lims.map((l) => l.max).filter((v): v is number => v !== undefined);
   return { min: mins.length ? Math.max(...mins) : undefined, max: maxes.length ? Math.min(...maxes) : undefined };

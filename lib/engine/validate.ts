@@ -6,7 +6,7 @@ import { compileChain, type Resolve } from './chain';
 import type { CheckCase, Definition, InputDef, Warning } from './types';
 import type { TemplateDefinition } from './template-types';
 import { DEFAULT_POLICY, evidenceOf, type Evidence, type EvidencePolicy } from './evidence';
-import { isLogRange } from './ranges';
+import { boundsAmong, isLogRange } from './ranges';
 
 /** What running check cases needs of an evaluator: a compiled correlation or a compiled chain. */
 type Evaluator = Pick<CompiledDefinition, 'outputSymbols' | 'limits' | 'evaluate' | 'readInputs'> & { definition: { inputs: InputDef[] } };
@@ -104,15 +104,10 @@ function coverageOf(c: Evaluator, cases: CheckCase[], results: CaseResult[]): Va
   const values = cases.map((cc) => { try { return c.readInputs(cc.inputs, 'inputs'); } catch { return null; } });
   c.definition.inputs.forEach((inp, k) => {
     // Published limits first; a table's range stands in where the definition declares none.
-    const own = c.limits.filter((l) => l.symbol === inp.symbol && !l.note?.startsWith('table:'));
-    const any = c.limits.filter((l) => l.symbol === inp.symbol);
-    // Several rules on one symbol: the box where none warns (the largest minimum, the smallest maximum).
-    const tightest = (ls: typeof own, side: 'min' | 'max') => {
-      const v = ls.map((l) => l[side]).filter((x): x is number => x !== undefined);
-      return v.length ? (side === 'min' ? Math.max(...v) : Math.min(...v)) : undefined;
-    };
-    const min = tightest(own, 'min') ?? tightest(any, 'min');
-    const max = tightest(own, 'max') ?? tightest(any, 'max');
+    const own = boundsAmong(c.limits.filter((l) => !l.note?.startsWith('table:')), inp.symbol);
+    const any = boundsAmong(c.limits, inp.symbol);
+    const min = own.min ?? any.min;
+    const max = own.max ?? any.max;
     if (min === undefined || max === undefined) return;
     const log = isLogRange(min, max);
     const pos = (x: number) => (log ? (Math.log(x) - Math.log(min)) / (Math.log(max) - Math.log(min)) : (x - min) / (max - min));

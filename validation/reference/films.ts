@@ -20,7 +20,7 @@
 
 const G_STD = 9.80665;
 
-interface FilmFluid { rho_l: number; rho_v: number; mu_l: number; k_l: number; cp_l: number; h_fg: number; dT: number; g?: number; /** ρ_film·Δρ when the film is not the denser phase (a vapour film): replaces ρ_l(ρ_l − ρ_v). */ buoyancy?: number }
+interface FilmFluid { rho_l: number; rho_v: number; mu_l: number; k_l: number; cp_l: number; h_fg: number; dT: number; g?: number }
 
 /** RK4 for a first-order system. */
 function rk4(f: (x: number, y: number[]) => number[], x0: number, y0: number[], x1: number, steps: number, each?: (x: number, y: number[]) => void): number[] {
@@ -82,19 +82,26 @@ export function nusseltTubeColumn(p: FilmFluid & { D: number; N: number; hfg?: n
   const g = p.g ?? G_STD;
   const R = p.D / 2;
   const hfg = p.hfg ?? p.h_fg;
-  const A = (3 * p.mu_l * p.k_l * p.dT * R) / ((p.buoyancy ?? p.rho_l * (p.rho_l - p.rho_v)) * g * hfg);
+  return filmAroundTubes((3 * p.mu_l * p.k_l * p.dT * R) / (p.rho_l * (p.rho_l - p.rho_v) * g * hfg), p.k_l, p.N);
+}
+
+/**
+ * The film equation around a column of N tubes with film parameter A = 3 μ k ΔT R/(ρ_film Δρ g h_fg) and film
+ * conductivity k: the mean coefficient of the first tube and of the column.
+ */
+function filmAroundTubes(A: number, k: number, N: number): { first: number; mean: number } {
   // Per side of the tube: G = sin φ δ³ ∝ the film flow; incoming flow per side from above, as G-equivalent: Γ_in = B·G_in.
   const steps = 2000;
   const phi0 = 1e-6; const phi1 = Math.PI - 1e-6;
   let gIn = 0; // what arrives at the top of the tube, per side, in G units (the G at φ = π of the tube above)
   let sum = 0; let first = 0;
-  for (let n = 1; n <= p.N; n++) {
+  for (let n = 1; n <= N; n++) {
     // Start: with incoming flow G_in at the top, G(φ0) ≈ G_in + φ0·(…): for G_in = 0 use the small-φ series G ≈ φ A^¾.
     const g0 = gIn > 0 ? gIn : phi0 * A ** 0.75;
     let integral = 0; let prevX = phi0; let prevH = 0;
     const last = rk4((x, [G]) => [A * Math.cbrt(Math.sin(x) / Math.max(G, 1e-300))], phi0, [g0], phi1, steps, (x, [G]) => {
       const delta = Math.cbrt(G / Math.max(Math.sin(x), 1e-300));
-      const hLocal = p.k_l / delta;
+      const hLocal = k / delta;
       if (x > phi0) integral += ((hLocal + prevH) / 2) * (x - prevX);
       prevX = x; prevH = hLocal;
     });
@@ -104,7 +111,7 @@ export function nusseltTubeColumn(p: FilmFluid & { D: number; N: number; hfg?: n
     // The film leaving the bottom (G at π, the flow per side) falls onto the next tube's top and splits again in two.
     gIn = last[0];
   }
-  return { first, mean: sum / p.N };
+  return { first, mean: sum / N };
 }
 
 /**
@@ -117,9 +124,7 @@ export function nusseltTubeColumn(p: FilmFluid & { D: number; N: number; hfg?: n
  * vapour's superheat, used the same way in both.
  */
 export function vapourFilmCylinder(p: { rho_l: number; rho_v: number; mu_v: number; k_v: number; hfg: number; dT: number; D: number; g?: number }): { freeSurface: number; stillLiquid: number } {
-  const film = (mu: number) => nusseltTubeColumn({
-    rho_l: p.rho_v, rho_v: 0, mu_l: mu, k_l: p.k_v, cp_l: 0, h_fg: p.hfg, dT: p.dT, g: p.g, D: p.D, N: 1,
-    buoyancy: p.rho_v * (p.rho_l - p.rho_v),
-  }).mean;
+  const g = p.g ?? G_STD;
+  const film = (mu: number) => filmAroundTubes((3 * mu * p.k_v * p.dT * (p.D / 2)) / (p.rho_v * (p.rho_l - p.rho_v) * g * p.hfg), p.k_v, 1).mean;
   return { freeSurface: film(p.mu_v), stillLiquid: film(4 * p.mu_v) };
 }

@@ -21,6 +21,8 @@ export interface Relation {
   relUncertainty?: string;
 }
 
+const JET_CELL_UNCERTAINTY = 'colliding wall jets lower an array’s mean below the single jet’s by 10–30 % in Martin’s own two forms at H/D ≤ 3; 20 % is a judgement';
+
 export const MAPPINGS: Record<string, Relation> = {
   /**
    * In the 1/3-power (turbulent) regime the heat flux through a horizontal surface heated from below does not
@@ -78,7 +80,7 @@ export const MAPPINGS: Record<string, Relation> = {
     inputs: (i) => ({ f: 1 / (4 * i.r_over_D * i.r_over_D) }),
     expected: (o) => ({ Nu_D: o.Nu_D }),
     rel: 0.2,
-    relUncertainty: 'colliding wall jets lower an array’s mean below the single jet’s by 10–30 % in Martin’s own two forms at H/D ≤ 3; 20 % is a judgement',
+    relUncertainty: JET_CELL_UNCERTAINTY,
   },
   /** The same relation read from the array: the single jet over a disc of radius r = D/(2√f). */
   'jet-single-cell': {
@@ -86,6 +88,6 @@ export const MAPPINGS: Record<string, Relation> = {
     inputs: (i) => ({ r_over_D: 1 / (2 * Math.sqrt(i.f)) }),
     expected: (o) => ({ Nu_D: o.Nu_D }),
     rel: 0.2,
-    relUncertainty: 'colliding wall jets lower an array’s mean below the single jet’s by 10–30 % in Martin’s own two forms at H/D ≤ 3; 20 % is a judgement',
+    relUncertainty: JET_CELL_UNCERTAINTY,
   },
 };
